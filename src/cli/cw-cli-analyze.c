@@ -45,7 +45,8 @@ percent (double x)
     return g_strdup_printf ("%.1f", p);
   if (p < 0.1)
     return g_strdup_printf ("%.2g", p);
-  return g_strdup_printf ("100 − %.2g", 100 * (1 - x));
+  /* enough decimals to show how far from 100 % it is */
+  return g_strdup_printf ("%.*f", MIN (12, 1 - (int) floor (log10 (MAX (100 - p, 1e-12))) + 1), p);
 }
 
 static void

@@ -1,0 +1,474 @@
+#include "config.h"
+
+#include "cw-ring-canvas.h"
+
+#include <glib/gi18n.h>
+#include <math.h>
+
+struct _CwRingCanvas
+{
+  GtkWidget parent_instance;
+
+  /* owned: a copy, so the canvas never points into a document that changed */
+  CwMolecule *mol;
+  int selected;
+};
+
+G_DEFINE_FINAL_TYPE (CwRingCanvas, cw_ring_canvas, GTK_TYPE_WIDGET)
+
+enum
+{
+  PROP_0,
+  PROP_SELECTED,
+  N_PROPS
+};
+
+enum
+{
+  CLEAR_REQUESTED,
+  CHOOSE_REQUESTED,
+  SEARCH_REQUESTED,
+  N_SIGNALS
+};
+
+static GParamSpec *properties[N_PROPS];
+static guint signals[N_SIGNALS];
+
+typedef struct
+{
+  double cx, cy, r;
+} Geometry;
+
+static void
+get_geometry (CwRingCanvas *self,
+              Geometry     *g)
+{
+  double w = gtk_widget_get_width (GTK_WIDGET (self));
+  double h = gtk_widget_get_height (GTK_WIDGET (self));
+
+  g->cx = w / 2.0;
+  g->cy = h / 2.0;
+  g->r = MIN (w, h) * 0.27;
+}
+
+/* Carbon 1 at the top, numbering clockwise. */
+static void
+carbon_point (const Geometry *g,
+              int             position,
+              double         *x,
+              double         *y)
+{
+  double a = -G_PI / 2.0 + (position - 1) * G_PI / 3.0;
+
+  *x = g->cx + g->r * cos (a);
+  *y = g->cy + g->r * sin (a);
+}
+
+static void
+get_colors (GtkWidget *widget,
+            GdkRGBA   *fg,
+            GdkRGBA   *accent)
+{
+  GtkStyleContext *ctx = gtk_widget_get_style_context (widget);
+
+G_GNUC_BEGIN_IGNORE_DEPRECATIONS
+  gtk_style_context_get_color (ctx, fg);
+  if (!gtk_style_context_lookup_color (ctx, "accent_bg_color", accent) &&
+      !gtk_style_context_lookup_color (ctx, "theme_selected_bg_color", accent))
+    gdk_rgba_parse (accent, "#3584e4");
+G_GNUC_END_IGNORE_DEPRECATIONS
+}
+
+static void
+draw_wedge (cairo_t *cr,
+            double   x0,
+            double   y0,
+            double   x1,
+            double   y1,
+            gboolean hashed)
+{
+  double dx = x1 - x0, dy = y1 - y0;
+  double len = hypot (dx, dy);
+  double nx = -dy / len, ny = dx / len;
+  double half = 5.0;
+
+  if (!hashed)
+    {
+      cairo_move_to (cr, x0, y0);
+      cairo_line_to (cr, x1 + nx * half, y1 + ny * half);
+      cairo_line_to (cr, x1 - nx * half, y1 - ny * half);
+      cairo_close_path (cr);
+      cairo_fill (cr);
+      return;
+    }
+  cairo_set_line_width (cr, 1.5);
+  for (int i = 1; i <= 7; i++)
+    {
+      double t = i / 7.0;
+      double px = x0 + dx * t, py = y0 + dy * t;
+
+      cairo_move_to (cr, px + nx * half * t, py + ny * half * t);
+      cairo_line_to (cr, px - nx * half * t, py - ny * half * t);
+    }
+  cairo_stroke (cr);
+}
+
+static void
+draw_label (GtkWidget  *widget,
+            cairo_t    *cr,
+            const char *markup,
+            double      x,
+            double      y,
+            gboolean    bold)
+{
+  PangoLayout *layout = gtk_widget_create_pango_layout (widget, NULL);
+  int w, h;
+
+  if (bold)
+    {
+      g_autofree char *m = g_strdup_printf ("<b>%s</b>", markup);
+      pango_layout_set_markup (layout, m, -1);
+    }
+  else
+    pango_layout_set_markup (layout, markup, -1);
+  pango_layout_get_pixel_size (layout, &w, &h);
+  cairo_move_to (cr, x - w / 2.0, y - h / 2.0);
+  pango_cairo_show_layout (cr, layout);
+  g_object_unref (layout);
+}
+
+static void
+draw_substituents (CwRingCanvas   *self,
+                   cairo_t        *cr,
+                   const Geometry *g,
+                   int             position)
+{
+  const CwSubstituent *up = cw_molecule_get (self->mol, position, CW_FACE_UP);
+  const CwSubstituent *down = cw_molecule_get (self->mol, position, CW_FACE_DOWN);
+  double base = -G_PI / 2.0 + (position - 1) * G_PI / 3.0;
+  double x0, y0;
+
+  carbon_point (g, position, &x0, &y0);
+  for (int f = 0; f < 2; f++)
+    {
+      const CwSubstituent *s = f == 0 ? up : down;
+      double a = base, x1, y1, lx, ly;
+
+      if (s == NULL)
+        continue;
+      /* A geminal pair splits its two bonds either side of the radial direction. */
+      if (up != NULL && down != NULL)
+        a += f == 0 ? -0.38 : 0.38;
+      x1 = x0 + g->r * 0.42 * cos (a);
+      y1 = y0 + g->r * 0.42 * sin (a);
+      lx = x0 + g->r * 0.70 * cos (a);
+      ly = y0 + g->r * 0.70 * sin (a);
+      draw_wedge (cr, x0, y0, x1, y1, s->face == CW_FACE_DOWN);
+      draw_label (GTK_WIDGET (self), cr, s->group->markup ? s->group->markup : s->group->label, lx, ly, FALSE);
+    }
+}
+
+static void
+cw_ring_canvas_snapshot (GtkWidget   *widget,
+                         GtkSnapshot *snapshot)
+{
+  CwRingCanvas *self = CW_RING_CANVAS (widget);
+  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  GdkRGBA fg, accent;
+  Geometry g;
+  cairo_t *cr;
+
+  if (w <= 0 || h <= 0)
+    return;
+  get_geometry (self, &g);
+  get_colors (widget, &fg, &accent);
+  cr = gtk_snapshot_append_cairo (snapshot, &GRAPHENE_RECT_INIT (0, 0, w, h));
+
+  if (self->selected >= 1)
+    {
+      double sx, sy;
+
+      carbon_point (&g, self->selected, &sx, &sy);
+      cairo_set_source_rgba (cr, accent.red, accent.green, accent.blue, 0.28);
+      cairo_arc (cr, sx, sy, MAX (14.0, g.r * 0.2), 0, 2 * G_PI);
+      cairo_fill (cr);
+    }
+
+  gdk_cairo_set_source_rgba (cr, &fg);
+  cairo_set_line_width (cr, 2.0);
+  cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      double x, y;
+
+      carbon_point (&g, p, &x, &y);
+      if (p == 1)
+        cairo_move_to (cr, x, y);
+      else
+        cairo_line_to (cr, x, y);
+    }
+  cairo_close_path (cr);
+  cairo_stroke (cr);
+
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      double x, y, a = -G_PI / 2.0 + (p - 1) * G_PI / 3.0;
+      char num[4];
+
+      carbon_point (&g, p, &x, &y);
+      g_snprintf (num, sizeof num, "%d", p);
+      /* Position numbers sit just inside the ring. */
+      cairo_save (cr);
+      cairo_set_source_rgba (cr, fg.red, fg.green, fg.blue, p == self->selected ? 1.0 : 0.6);
+      draw_label (widget, cr, num, x - 0.2 * g.r * cos (a), y - 0.2 * g.r * sin (a), p == self->selected);
+      cairo_restore (cr);
+      if (self->mol != NULL)
+        draw_substituents (self, cr, &g, p);
+    }
+  cairo_destroy (cr);
+}
+
+static void
+update_accessible (CwRingCanvas *self)
+{
+  const CwSubstituent *up, *down;
+  g_autofree char *text = NULL;
+
+  if (self->mol == NULL || self->selected < 1)
+    return;
+  up = cw_molecule_get (self->mol, self->selected, CW_FACE_UP);
+  down = cw_molecule_get (self->mol, self->selected, CW_FACE_DOWN);
+  /* TRANSLATORS: screen-reader text for the ring canvas: carbon number, up group, down group */
+  text = g_strdup_printf (_("Carbon %d selected; up face: %s; down face: %s"), self->selected,
+                          up ? up->group->label : _("none"), down ? down->group->label : _("none"));
+  gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_VALUE_TEXT, text, -1);
+}
+
+static void
+click_pressed_cb (GtkGestureClick *gesture,
+                  int              n_press,
+                  double           x,
+                  double           y,
+                  CwRingCanvas    *self)
+{
+  int p = cw_ring_canvas_hit_test (self, x, y);
+
+  gtk_widget_grab_focus (GTK_WIDGET (self));
+  if (p > 0)
+    cw_ring_canvas_set_selected (self, p);
+  if (p > 0 && n_press == 2)
+    g_signal_emit (self, signals[CHOOSE_REQUESTED], 0, (int) CW_FACE_UP);
+}
+
+static gboolean
+key_pressed_cb (GtkEventControllerKey *controller,
+                guint                  keyval,
+                guint                  keycode,
+                GdkModifierType        state,
+                CwRingCanvas          *self)
+{
+  gunichar ch = gdk_keyval_to_unicode (keyval);
+  int sel = MAX (self->selected, 1);
+
+  if (state & (GDK_CONTROL_MASK | GDK_ALT_MASK | GDK_SUPER_MASK))
+    return FALSE;
+  if (keyval >= GDK_KEY_1 && keyval <= GDK_KEY_6)
+    cw_ring_canvas_set_selected (self, keyval - GDK_KEY_0);
+  else if (keyval >= GDK_KEY_KP_1 && keyval <= GDK_KEY_KP_6)
+    cw_ring_canvas_set_selected (self, keyval - GDK_KEY_KP_0);
+  else if (keyval == GDK_KEY_Right || keyval == GDK_KEY_Down)
+    cw_ring_canvas_set_selected (self, sel % CW_RING_SIZE + 1);
+  else if (keyval == GDK_KEY_Left || keyval == GDK_KEY_Up)
+    cw_ring_canvas_set_selected (self, (sel + CW_RING_SIZE - 2) % CW_RING_SIZE + 1);
+  else if (keyval == GDK_KEY_Delete || keyval == GDK_KEY_BackSpace || keyval == GDK_KEY_KP_Delete)
+    g_signal_emit (self, signals[CLEAR_REQUESTED], 0);
+  else if (keyval == GDK_KEY_Return || keyval == GDK_KEY_KP_Enter || keyval == GDK_KEY_space)
+    g_signal_emit (self, signals[CHOOSE_REQUESTED], 0,
+                   (int) ((state & GDK_SHIFT_MASK) ? CW_FACE_DOWN : CW_FACE_UP));
+  else if (ch != 0 && g_unichar_isgraph (ch))
+    {
+      char buf[8] = { 0 };
+
+      g_unichar_to_utf8 (ch, buf);
+      g_signal_emit (self, signals[SEARCH_REQUESTED], 0, buf);
+    }
+  else
+    return FALSE;
+  return TRUE;
+}
+
+static void
+cw_ring_canvas_finalize (GObject *object)
+{
+  CwRingCanvas *self = CW_RING_CANVAS (object);
+
+  g_clear_pointer (&self->mol, cw_molecule_free);
+
+  G_OBJECT_CLASS (cw_ring_canvas_parent_class)->finalize (object);
+}
+
+static void
+cw_ring_canvas_get_property (GObject    *object,
+                             guint       prop_id,
+                             GValue     *value,
+                             GParamSpec *pspec)
+{
+  CwRingCanvas *self = CW_RING_CANVAS (object);
+
+  switch (prop_id)
+    {
+    case PROP_SELECTED:
+      g_value_set_int (value, self->selected);
+      break;
+    default:
+      G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+    }
+}
+
+static void
+cw_ring_canvas_set_property (GObject      *object,
+                             guint         prop_id,
+                             const GValue *value,
+                             GParamSpec   *pspec)
+{
+  CwRingCanvas *self = CW_RING_CANVAS (object);
+
+  switch (prop_id)
+    {
+    case PROP_SELECTED:
+      cw_ring_canvas_set_selected (self, g_value_get_int (value));
+      break;
+    default:
+      G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+    }
+}
+
+static void
+cw_ring_canvas_measure (GtkWidget      *widget,
+                        GtkOrientation  orientation,
+                        int             for_size,
+                        int            *minimum,
+                        int            *natural,
+                        int            *minimum_baseline,
+                        int            *natural_baseline)
+{
+  *minimum = 220;
+  *natural = 320;
+}
+
+static void
+cw_ring_canvas_class_init (CwRingCanvasClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->finalize = cw_ring_canvas_finalize;
+  object_class->get_property = cw_ring_canvas_get_property;
+  object_class->set_property = cw_ring_canvas_set_property;
+  widget_class->snapshot = cw_ring_canvas_snapshot;
+  widget_class->measure = cw_ring_canvas_measure;
+
+  properties[PROP_SELECTED] =
+    g_param_spec_int ("selected", NULL, NULL, 1, CW_RING_SIZE, 1,
+                      G_PARAM_READWRITE | G_PARAM_STATIC_STRINGS | G_PARAM_EXPLICIT_NOTIFY);
+  g_object_class_install_properties (object_class, N_PROPS, properties);
+
+  signals[CLEAR_REQUESTED] =
+    g_signal_new ("clear-requested", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST, 0, NULL, NULL,
+                  NULL, G_TYPE_NONE, 0);
+  signals[CHOOSE_REQUESTED] =
+    g_signal_new ("choose-requested", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST, 0, NULL, NULL,
+                  NULL, G_TYPE_NONE, 1, G_TYPE_INT);
+  signals[SEARCH_REQUESTED] =
+    g_signal_new ("search-requested", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST, 0, NULL, NULL,
+                  NULL, G_TYPE_NONE, 1, G_TYPE_STRING);
+
+  gtk_widget_class_set_css_name (widget_class, "ringcanvas");
+  gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_GROUP);
+}
+
+static void
+cw_ring_canvas_init (CwRingCanvas *self)
+{
+  GtkGesture *click = gtk_gesture_click_new ();
+  GtkEventController *keys = gtk_event_controller_key_new ();
+
+  self->selected = 1;
+  gtk_widget_set_focusable (GTK_WIDGET (self), TRUE);
+  gtk_widget_set_focus_on_click (GTK_WIDGET (self), TRUE);
+  gtk_widget_add_css_class (GTK_WIDGET (self), "cw-ring-canvas");
+
+  g_signal_connect (click, "pressed", G_CALLBACK (click_pressed_cb), self);
+  gtk_widget_add_controller (GTK_WIDGET (self), GTK_EVENT_CONTROLLER (click));
+  g_signal_connect (keys, "key-pressed", G_CALLBACK (key_pressed_cb), self);
+  gtk_widget_add_controller (GTK_WIDGET (self), keys);
+}
+
+GtkWidget *
+cw_ring_canvas_new (void)
+{
+  return g_object_new (CW_TYPE_RING_CANVAS, NULL);
+}
+
+void
+cw_ring_canvas_set_molecule (CwRingCanvas     *self,
+                             const CwMolecule *mol)
+{
+  g_return_if_fail (CW_IS_RING_CANVAS (self));
+
+  g_clear_pointer (&self->mol, cw_molecule_free);
+  if (mol != NULL)
+    self->mol = cw_molecule_copy (mol);
+  update_accessible (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+}
+
+int
+cw_ring_canvas_get_selected (CwRingCanvas *self)
+{
+  g_return_val_if_fail (CW_IS_RING_CANVAS (self), 0);
+  return self->selected;
+}
+
+void
+cw_ring_canvas_set_selected (CwRingCanvas *self,
+                             int           position)
+{
+  g_return_if_fail (CW_IS_RING_CANVAS (self));
+
+  position = CLAMP (position, 1, CW_RING_SIZE);
+  if (position == self->selected)
+    return;
+  self->selected = position;
+  update_accessible (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+  g_object_notify_by_pspec (G_OBJECT (self), properties[PROP_SELECTED]);
+}
+
+int
+cw_ring_canvas_hit_test (CwRingCanvas *self,
+                         double        x,
+                         double        y)
+{
+  Geometry g;
+  int best = 0;
+  double best_d = G_MAXDOUBLE;
+
+  g_return_val_if_fail (CW_IS_RING_CANVAS (self), 0);
+
+  get_geometry (self, &g);
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      double px, py, d;
+
+      carbon_point (&g, p, &px, &py);
+      d = hypot (x - px, y - py);
+      if (d < best_d)
+        {
+          best_d = d;
+          best = p;
+        }
+    }
+  /* Generous target: anywhere within the carbon's own segment out to its labels. */
+  return best_d <= g.r * 0.9 ? best : 0;
+}

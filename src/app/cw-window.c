@@ -1,0 +1,617 @@
+#include "config.h"
+
+#include "cw-window.h"
+
+#include <glib/gi18n.h>
+
+#include "cw-app-data.h"
+#include "cw-group-item.h"
+#include "cw-window-private.h"
+
+G_DEFINE_FINAL_TYPE (CwWindow, cw_window, GTK_TYPE_APPLICATION_WINDOW)
+
+/* ---- units and options ------------------------------------------------------------ */
+
+CwEnergyUnit
+cw_window_get_energy_unit (CwWindow *self)
+{
+  return g_settings_get_enum (self->settings, "energy-unit") == 1 ? CW_UNIT_KJ : CW_UNIT_KCAL;
+}
+
+CwTemperatureUnit
+cw_window_get_temperature_unit (CwWindow *self)
+{
+  return g_settings_get_enum (self->settings, "temperature-unit") == 1 ? CW_TUNIT_CELSIUS : CW_TUNIT_KELVIN;
+}
+
+/* The window follows the theme: light text on the background means a dark style. */
+static gboolean
+widget_is_dark (GtkWidget *widget)
+{
+  GdkRGBA fg;
+
+G_GNUC_BEGIN_IGNORE_DEPRECATIONS
+  gtk_style_context_get_color (gtk_widget_get_style_context (widget), &fg);
+G_GNUC_END_IGNORE_DEPRECATIONS
+  return 0.2126 * fg.red + 0.7152 * fg.green + 0.0722 * fg.blue > 0.5;
+}
+
+void
+cw_window_render_options (CwWindow        *self,
+                          GtkWidget       *widget,
+                          CwRenderOptions *opt)
+{
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+
+  cw_render_options_init (opt);
+  opt->unit = cw_window_get_energy_unit (self);
+  opt->temperature_unit = cw_window_get_temperature_unit (self);
+  opt->dark = widget != NULL && widget_is_dark (widget);
+  opt->highlight_sub = -1;
+  for (int i = 0; i < mol->n_subs; i++)
+    if (mol->subs[i].position == sel)
+      {
+        opt->highlight_sub = i;
+        break;
+      }
+}
+
+static void
+draw_figure (CwWindow       *self,
+             GtkDrawingArea *area,
+             CwFigure        fig,
+             cairo_t        *cr,
+             int             width,
+             int             height)
+{
+  CwRenderOptions opt;
+
+  if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
+    return;
+  cw_window_render_options (self, GTK_WIDGET (area), &opt);
+  cw_render_figure (cr, fig, self->data, cw_document_peek_molecule (self->doc),
+                    self->an_valid ? &self->an : NULL, &opt, width, height);
+}
+
+static void
+draw_chairs_cb (GtkDrawingArea *area,
+                cairo_t        *cr,
+                int             width,
+                int             height,
+                gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_CHAIRS, cr, width, height);
+}
+
+static void
+draw_profile_cb (GtkDrawingArea *area,
+                 cairo_t        *cr,
+                 int             width,
+                 int             height,
+                 gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_PROFILE, cr, width, height);
+}
+
+static void
+draw_scan_cb (GtkDrawingArea *area,
+              cairo_t        *cr,
+              int             width,
+              int             height,
+              gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_SCAN, cr, width, height);
+}
+
+/* ---- refresh after every change ----------------------------------------------------- */
+
+static void
+update_groups_store (CwWindow *self)
+{
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  guint n_table = cw_group_table_get_n_groups (self->data->groups);
+  guint n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
+  g_autoptr (GPtrArray) items = g_ptr_array_new_with_free_func (g_object_unref);
+
+  /* Custom groups first: they are what the user just made. The store keeps borrowed
+   * pointers into the document, so rebuild it whenever the document is replaced. */
+  for (guint i = 0; i < n_custom; i++)
+    g_ptr_array_add (items, cw_group_item_new (g_ptr_array_index (mol->custom_groups, i)));
+  for (guint i = 0; i < n_table; i++)
+    g_ptr_array_add (items, cw_group_item_new (cw_group_table_get (self->data->groups, i)));
+  g_list_store_splice (self->groups_store, 0, g_list_model_get_n_items (G_LIST_MODEL (self->groups_store)),
+                       items->pdata, items->len);
+  self->n_custom_shown = n_custom;
+}
+
+static void
+update_editor (CwWindow *self)
+{
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+  const CwSubstituent *up = cw_molecule_get (mol, sel, CW_FACE_UP);
+  const CwSubstituent *down = cw_molecule_get (mol, sel, CW_FACE_DOWN);
+  g_autofree char *text = g_strdup_printf (_("Carbon %d"), sel);
+
+  gtk_label_set_text (self->carbon_label, text);
+  cw_group_chooser_set_group (self->up_chooser, up ? up->group : NULL);
+  cw_group_chooser_set_group (self->down_chooser, down ? down->group : NULL);
+  gtk_widget_set_sensitive (GTK_WIDGET (self->up_clear), up != NULL);
+  gtk_widget_set_sensitive (GTK_WIDGET (self->down_clear), down != NULL);
+}
+
+static void
+update_temperature_widgets (CwWindow *self)
+{
+  double k = cw_document_get_temperature (self->doc);
+  CwTemperatureUnit tu = cw_window_get_temperature_unit (self);
+  double offset = tu == CW_TUNIT_CELSIUS ? CW_ZERO_C : 0.0;
+  g_autofree char *label = cw_format_temperature (k, tu);
+
+  self->updating_temperature = TRUE;
+  gtk_adjustment_configure (self->temperature_adjustment, k - offset, 100.0 - offset, 600.0 - offset,
+                            1.0, 10.0, 0.0);
+  self->updating_temperature = FALSE;
+  gtk_menu_button_set_label (self->temperature_button, label);
+}
+
+void
+cw_window_update_title (CwWindow *self)
+{
+  const char *title = cw_document_get_title (self->doc);
+  g_autofree char *basename = NULL;
+  g_autofree char *shown = NULL;
+  g_autofree char *config = cw_molecule_dup_configuration (cw_document_peek_molecule (self->doc));
+  gboolean modified = cw_window_get_modified (self);
+
+  if (title == NULL || *title == '\0')
+    {
+      if (self->file != NULL)
+        basename = g_file_get_basename (self->file);
+      title = basename ? basename : _("Untitled");
+    }
+  shown = modified ? g_strconcat ("• ", title, NULL) : g_strdup (title);
+  gtk_label_set_text (self->title_label, shown);
+  gtk_label_set_text (self->subtitle_label, config && *config ? config : _("Substituted cyclohexane"));
+  gtk_widget_set_visible (GTK_WIDGET (self->subtitle_label), TRUE);
+  {
+    g_autofree char *win_title = g_strdup_printf ("%s – %s", shown, _("Chairwise"));
+    gtk_window_set_title (GTK_WINDOW (self), win_title);
+  }
+}
+
+void
+cw_window_refresh (CwWindow *self)
+{
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  g_autoptr (GError) error = NULL;
+  CwConditions cond;
+  guint n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
+
+  cw_document_get_conditions (self->doc, &cond);
+  g_clear_pointer (&self->analysis_error, g_free);
+  self->an_valid = cw_analyze (self->data, mol, &cond, &self->an, &error);
+  if (!self->an_valid)
+    self->analysis_error = g_strdup (error->message);
+
+  if (n_custom != self->n_custom_shown)
+    update_groups_store (self);
+  cw_ring_canvas_set_molecule (self->ring_canvas, mol);
+  update_editor (self);
+  update_temperature_widgets (self);
+  cw_window_update_results (self);
+  cw_window_update_title (self);
+  cw_window_update_edit_actions (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area));
+  gtk_widget_queue_draw (GTK_WIDGET (self->profile_area));
+  gtk_widget_queue_draw (GTK_WIDGET (self->scan_area));
+}
+
+void
+cw_window_begin_edit (CwWindow   *self,
+                      const char *merge_key)
+{
+  cw_history_push (self->history, self->doc, self->serial, merge_key);
+}
+
+void
+cw_window_end_edit (CwWindow *self)
+{
+  self->serial = ++self->next_serial;
+  cw_window_refresh (self);
+  cw_window_schedule_autosave (self);
+}
+
+void
+cw_window_show_error (CwWindow     *self,
+                      const char   *primary,
+                      const GError *error)
+{
+  GtkWidget *dialog;
+
+  dialog = gtk_message_dialog_new (GTK_WINDOW (self), GTK_DIALOG_MODAL | GTK_DIALOG_DESTROY_WITH_PARENT,
+                                   GTK_MESSAGE_ERROR, GTK_BUTTONS_CLOSE, "%s", primary);
+  if (error != NULL)
+    gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s", error->message);
+  g_signal_connect (dialog, "response", G_CALLBACK (gtk_window_destroy), NULL);
+  gtk_window_present (GTK_WINDOW (dialog));
+}
+
+/* ---- template callbacks ------------------------------------------------------------- */
+
+static void
+ring_selected_cb (CwWindow *self)
+{
+  update_editor (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area));
+}
+
+static void
+ring_clear_requested_cb (CwWindow *self)
+{
+  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+
+  gtk_widget_activate_action (GTK_WIDGET (self), "win.clear-carbon", "i", sel);
+}
+
+static void
+ring_search_requested_cb (CwWindow   *self,
+                          const char *text)
+{
+  cw_group_chooser_popup (self->up_chooser, text);
+}
+
+static void
+ring_choose_requested_cb (CwWindow *self,
+                          int       face)
+{
+  cw_group_chooser_popup (face == CW_FACE_DOWN ? self->down_chooser : self->up_chooser, NULL);
+}
+
+static void
+chosen (CwWindow   *self,
+        CwFace      face,
+        const char *id)
+{
+  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+
+  gtk_widget_activate_action (GTK_WIDGET (self), "win.set-group", "(iss)", sel, cw_face_to_string (face), id);
+  gtk_widget_grab_focus (GTK_WIDGET (self->ring_canvas));
+}
+
+static void
+up_chosen_cb (CwWindow   *self,
+              const char *id)
+{
+  chosen (self, CW_FACE_UP, id);
+}
+
+static void
+down_chosen_cb (CwWindow   *self,
+                const char *id)
+{
+  chosen (self, CW_FACE_DOWN, id);
+}
+
+static void
+up_clear_cb (CwWindow *self)
+{
+  gtk_widget_activate_action (GTK_WIDGET (self), "win.remove-group", "(is)",
+                              cw_ring_canvas_get_selected (self->ring_canvas), cw_face_to_string (CW_FACE_UP));
+}
+
+static void
+down_clear_cb (CwWindow *self)
+{
+  gtk_widget_activate_action (GTK_WIDGET (self), "win.remove-group", "(is)",
+                              cw_ring_canvas_get_selected (self->ring_canvas), cw_face_to_string (CW_FACE_DOWN));
+}
+
+static void
+temperature_value_changed_cb (CwWindow *self)
+{
+  double v = gtk_adjustment_get_value (self->temperature_adjustment);
+
+  if (self->updating_temperature)
+    return;
+  if (cw_window_get_temperature_unit (self) == CW_TUNIT_CELSIUS)
+    v += CW_ZERO_C;
+  gtk_widget_activate_action (GTK_WIDGET (self), "win.set-temperature", "d", v);
+}
+
+static void
+lower_page_changed_cb (CwWindow *self)
+{
+  gtk_widget_queue_draw (GTK_WIDGET (self->scan_area));
+}
+
+static void
+settings_changed_cb (CwWindow   *self,
+                     const char *key)
+{
+  if (g_strcmp0 (key, "energy-unit") == 0)
+    {
+      cw_group_chooser_set_energy_unit (self->up_chooser, cw_window_get_energy_unit (self));
+      cw_group_chooser_set_energy_unit (self->down_chooser, cw_window_get_energy_unit (self));
+    }
+  if (g_strcmp0 (key, "energy-unit") == 0 || g_strcmp0 (key, "temperature-unit") == 0)
+    cw_window_refresh (self);
+  else if (g_strcmp0 (key, "recent-files") == 0)
+    cw_window_update_recent_menu (self);
+}
+
+static gboolean
+enum_to_selected (GValue   *value,
+                  GVariant *variant,
+                  gpointer  user_data)
+{
+  g_value_set_uint (value, g_strcmp0 (g_variant_get_string (variant, NULL), "kj") == 0 ? 1 : 0);
+  return TRUE;
+}
+
+static GVariant *
+selected_to_enum (const GValue       *value,
+                  const GVariantType *type,
+                  gpointer            user_data)
+{
+  return g_variant_new_string (g_value_get_uint (value) == 1 ? "kj" : "kcal");
+}
+
+/* ---- GObject ------------------------------------------------------------------------ */
+
+static gboolean
+cw_window_close_request_vfunc (GtkWindow *window)
+{
+  CwWindow *self = CW_WINDOW (window);
+
+  if (cw_window_close_request (self))
+    return TRUE;
+  if (!gtk_window_is_maximized (window))
+    {
+      int w, h;
+
+      gtk_window_get_default_size (window, &w, &h);
+      g_settings_set_int (self->settings, "window-width", MAX (w, 360));
+      g_settings_set_int (self->settings, "window-height", MAX (h, 360));
+    }
+  g_settings_set_boolean (self->settings, "window-maximized", gtk_window_is_maximized (window));
+  return GTK_WINDOW_CLASS (cw_window_parent_class)->close_request (window);
+}
+
+static void
+cw_window_dispose (GObject *object)
+{
+  CwWindow *self = CW_WINDOW (object);
+
+  g_clear_handle_id (&self->autosave_id, g_source_remove);
+  if (self->pending_dialog != NULL)
+    gtk_window_destroy (GTK_WINDOW (g_steal_pointer (&self->pending_dialog)));
+  gtk_widget_dispose_template (GTK_WIDGET (self), CW_TYPE_WINDOW);
+  g_clear_object (&self->groups_store);
+  g_clear_object (&self->settings);
+  g_clear_object (&self->file);
+
+  G_OBJECT_CLASS (cw_window_parent_class)->dispose (object);
+}
+
+static void
+cw_window_finalize (GObject *object)
+{
+  CwWindow *self = CW_WINDOW (object);
+
+  /* A window that goes away on purpose leaves no autosave behind. */
+  cw_window_drop_autosave (self);
+  g_clear_pointer (&self->doc, cw_document_free);
+  g_clear_pointer (&self->history, cw_history_free);
+  g_clear_pointer (&self->analysis_error, g_free);
+
+  G_OBJECT_CLASS (cw_window_parent_class)->finalize (object);
+}
+
+static void
+cw_window_class_init (CwWindowClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+  GtkWindowClass *window_class = GTK_WINDOW_CLASS (klass);
+
+  object_class->dispose = cw_window_dispose;
+  object_class->finalize = cw_window_finalize;
+  window_class->close_request = cw_window_close_request_vfunc;
+
+  g_type_ensure (CW_TYPE_RING_CANVAS);
+  g_type_ensure (CW_TYPE_GROUP_CHOOSER);
+
+  gtk_widget_class_set_template_from_resource (widget_class, "/org/chairwise/Chairwise/ui/cw-window.ui");
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, title_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, subtitle_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_button);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_spin);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_adjustment);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_error_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, energy_unit_dropdown);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, ring_canvas);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, carbon_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, up_chooser);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, down_chooser);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, up_clear);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, down_clear);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, chairs_area);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, profile_area);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, scan_area);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, pop1_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, pop2_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, summary_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, flags_box);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, terms_grid);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, lower_stack);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, caution_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, recent_section);
+  gtk_widget_class_bind_template_callback (widget_class, ring_selected_cb);
+  gtk_widget_class_bind_template_callback (widget_class, ring_clear_requested_cb);
+  gtk_widget_class_bind_template_callback (widget_class, ring_search_requested_cb);
+  gtk_widget_class_bind_template_callback (widget_class, up_chosen_cb);
+  gtk_widget_class_bind_template_callback (widget_class, down_chosen_cb);
+  gtk_widget_class_bind_template_callback (widget_class, up_clear_cb);
+  gtk_widget_class_bind_template_callback (widget_class, down_clear_cb);
+  gtk_widget_class_bind_template_callback (widget_class, temperature_value_changed_cb);
+  gtk_widget_class_bind_template_callback (widget_class, lower_page_changed_cb);
+
+  cw_window_class_add_edit_actions (widget_class);
+  cw_window_class_add_file_actions (widget_class);
+  cw_window_class_add_export_actions (widget_class);
+}
+
+static void
+cw_window_init (CwWindow *self)
+{
+  g_autoptr (GSimpleActionGroup) prefs = g_simple_action_group_new ();
+  g_autoptr (GAction) tunit = NULL;
+  g_autoptr (GError) error = NULL;
+
+  gtk_widget_init_template (GTK_WIDGET (self));
+
+  self->data = cw_app_get_data (&error);
+  /* The tables are compiled into the program; failing here is a broken build. */
+  if (self->data == NULL)
+    g_error ("Cannot load the group tables: %s", error->message);
+
+  self->settings = g_settings_new (CW_APP_ID);
+  self->history = cw_history_new (200);
+  self->doc = cw_document_new ();
+  cw_document_set_temperature (self->doc, g_settings_get_double (self->settings, "default-temperature"));
+  self->groups_store = g_list_store_new (CW_TYPE_GROUP_ITEM);
+  self->n_custom_shown = G_MAXUINT;
+
+  tunit = g_settings_create_action (self->settings, "temperature-unit");
+  g_action_map_add_action (G_ACTION_MAP (prefs), tunit);
+  gtk_widget_insert_action_group (GTK_WIDGET (self), "prefs", G_ACTION_GROUP (prefs));
+  g_settings_bind_with_mapping (self->settings, "energy-unit", self->energy_unit_dropdown, "selected",
+                                G_SETTINGS_BIND_DEFAULT, enum_to_selected, selected_to_enum, NULL, NULL);
+  g_settings_bind (self->settings, "lower-page", self->lower_stack, "visible-child-name", G_SETTINGS_BIND_DEFAULT);
+  g_signal_connect_object (self->settings, "changed", G_CALLBACK (settings_changed_cb), self, G_CONNECT_SWAPPED);
+  gtk_window_set_default_size (GTK_WINDOW (self), g_settings_get_int (self->settings, "window-width"),
+                               g_settings_get_int (self->settings, "window-height"));
+  if (g_settings_get_boolean (self->settings, "window-maximized"))
+    gtk_window_maximize (GTK_WINDOW (self));
+
+  cw_group_chooser_set_model (self->up_chooser, G_LIST_MODEL (self->groups_store));
+  cw_group_chooser_set_model (self->down_chooser, G_LIST_MODEL (self->groups_store));
+  cw_group_chooser_set_energy_unit (self->up_chooser, cw_window_get_energy_unit (self));
+  cw_group_chooser_set_energy_unit (self->down_chooser, cw_window_get_energy_unit (self));
+  g_signal_connect_object (self->ring_canvas, "choose-requested", G_CALLBACK (ring_choose_requested_cb), self,
+                           G_CONNECT_SWAPPED);
+
+  gtk_drawing_area_set_draw_func (self->chairs_area, draw_chairs_cb, self, NULL);
+  gtk_drawing_area_set_draw_func (self->profile_area, draw_profile_cb, self, NULL);
+  gtk_drawing_area_set_draw_func (self->scan_area, draw_scan_cb, self, NULL);
+  gtk_label_set_text (self->caution_label, cw_caution_text ());
+
+  cw_window_file_init (self);
+  cw_window_refresh (self);
+}
+
+/* ---- public API ----------------------------------------------------------------------- */
+
+CwWindow *
+cw_window_new (GtkApplication *app)
+{
+  return g_object_new (CW_TYPE_WINDOW, "application", app, NULL);
+}
+
+void
+cw_window_set_document (CwWindow   *self,
+                        CwDocument *doc,
+                        GFile      *file,
+                        gboolean    modified)
+{
+  g_return_if_fail (CW_IS_WINDOW (self));
+  g_return_if_fail (doc != NULL);
+
+  g_clear_pointer (&self->doc, cw_document_free);
+  self->doc = doc;
+  g_set_object (&self->file, file);
+  cw_history_clear (self->history);
+  self->serial = ++self->next_serial;
+  self->saved_serial = modified ? 0 : self->serial;
+  /* The chooser rows point into the old document's custom groups: rebuild them. */
+  self->n_custom_shown = G_MAXUINT;
+  cw_window_refresh (self);
+  if (modified)
+    cw_window_schedule_autosave (self);
+  else
+    cw_window_drop_autosave (self);
+}
+
+const CwDocument *
+cw_window_get_document (CwWindow *self)
+{
+  g_return_val_if_fail (CW_IS_WINDOW (self), NULL);
+  return self->doc;
+}
+
+const CwAnalysis *
+cw_window_get_analysis (CwWindow *self)
+{
+  g_return_val_if_fail (CW_IS_WINDOW (self), NULL);
+  return self->an_valid ? &self->an : NULL;
+}
+
+GFile *
+cw_window_get_file (CwWindow *self)
+{
+  g_return_val_if_fail (CW_IS_WINDOW (self), NULL);
+  return self->file;
+}
+
+gboolean
+cw_window_get_modified (CwWindow *self)
+{
+  g_return_val_if_fail (CW_IS_WINDOW (self), FALSE);
+  return self->serial != self->saved_serial;
+}
+
+gboolean
+cw_window_is_pristine (CwWindow *self)
+{
+  g_return_val_if_fail (CW_IS_WINDOW (self), FALSE);
+  return self->file == NULL && !cw_window_get_modified (self) &&
+         cw_document_peek_molecule (self->doc)->n_subs == 0;
+}
+
+gboolean
+cw_window_save_screenshot (CwWindow   *self,
+                           const char *path,
+                           GError    **error)
+{
+  GtkWidget *widget = GTK_WIDGET (self);
+  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  g_autoptr (GdkPaintable) paintable = NULL;
+  g_autoptr (GskRenderNode) node = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  GtkSnapshot *snapshot;
+
+  if (w <= 0 || h <= 0 || gtk_native_get_renderer (GTK_NATIVE (self)) == NULL)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window is not shown yet"));
+      return FALSE;
+    }
+  paintable = gtk_widget_paintable_new (widget);
+  snapshot = gtk_snapshot_new ();
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  if (node == NULL)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window drew nothing"));
+      return FALSE;
+    }
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (self)), node,
+                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+  if (!gdk_texture_save_to_png (texture, path))
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("Could not write “%s”"), path);
+      return FALSE;
+    }
+  return TRUE;
+}

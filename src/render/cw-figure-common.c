@@ -1,0 +1,189 @@
+#include "config.h"
+
+#include "cw-figures.h"
+
+#include <math.h>
+
+#include "cw-render-private.h"
+
+static void
+grow (CwBox *b, gboolean *any, double x, double y)
+{
+  if (!*any)
+    {
+      *b = (CwBox) { x, y, 0, 0 };
+      *any = TRUE;
+      return;
+    }
+  CwBox p = { x, y, 0, 0 };
+  *b = cw_box_union (b, &p);
+}
+
+CwBox
+cw_scene_bounds (const CwScene *scene)
+{
+  CwBox b = { 0, 0, 0, 0 };
+  gboolean any = FALSE;
+
+  for (guint i = 0; i < scene->prims->len; i++)
+    {
+      const CwPrim *p = &g_array_index (scene->prims, CwPrim, i);
+      double r = 0.5 * MAX (p->line_width, p->wide);
+
+      switch (p->kind)
+        {
+        case CW_PRIM_TEXT:
+          grow (&b, &any, p->box.x, p->box.y);
+          grow (&b, &any, p->box.x + p->box.w, p->box.y + p->box.h);
+          break;
+        case CW_PRIM_RECT:
+          grow (&b, &any, p->x0, p->y0);
+          grow (&b, &any, p->x0 + p->x1, p->y0 + p->y1);
+          break;
+        case CW_PRIM_MARKER:
+          grow (&b, &any, p->x0 - r, p->y0 - r);
+          grow (&b, &any, p->x0 + r, p->y0 + r);
+          break;
+        case CW_PRIM_POLYLINE:
+        case CW_PRIM_POLYGON:
+          for (guint k = 0; k < p->n_points; k++)
+            {
+              CwPoint q = g_array_index (scene->points, CwPoint, p->first_point + k);
+              grow (&b, &any, q.x, q.y);
+            }
+          break;
+        case CW_PRIM_LINE:
+        case CW_PRIM_WEDGE:
+        case CW_PRIM_HASH:
+          grow (&b, &any, p->x0 - r, p->y0 - r);
+          grow (&b, &any, p->x1 + r, p->y1 + r);
+          grow (&b, &any, p->x0 + r, p->y0 + r);
+          grow (&b, &any, p->x1 - r, p->y1 - r);
+          break;
+        default:
+          break;
+        }
+    }
+  return b;
+}
+
+void
+cw_scene_fit (CwScene *scene, double margin)
+{
+  CwBox b = cw_scene_bounds (scene);
+  double w = b.w + 2 * margin, h = b.h + 2 * margin;
+  double cx = b.x + 0.5 * b.w, cy = b.y + 0.5 * b.h;
+
+  /* Keep the design box where it is big enough: grow it only when the content spills over. */
+  if (b.x - margin >= 0 && b.y - margin >= 0 && b.x + b.w + margin <= scene->width &&
+      b.y + b.h + margin <= scene->height)
+    return;
+  w = MAX (w, scene->width);
+  h = MAX (h, scene->height);
+  scene->origin_x = cx - 0.5 * w;
+  scene->origin_y = cy - 0.5 * h;
+  scene->width = w;
+  scene->height = h;
+}
+
+void
+cw_scene_message (CwScene *scene, const char *text)
+{
+  g_autofree char *esc = g_markup_escape_text (text, -1);
+
+  cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_MUTED, esc, 12, FALSE,
+                    scene->width / 2, scene->height / 2, 0.5, 0.5);
+}
+
+static gboolean
+text_fits (const CwScene *scene, const CwBox *box)
+{
+  if (cw_scene_box_hits_text (scene, box, 1.0, -1))
+    return FALSE;
+  for (guint i = 0; i < scene->prims->len; i++)
+    {
+      const CwPrim *p = &g_array_index (scene->prims, CwPrim, i);
+
+      if ((p->kind == CW_PRIM_LINE || p->kind == CW_PRIM_WEDGE || p->kind == CW_PRIM_HASH) &&
+          (p->role == CW_ROLE_RING_BOND || p->role == CW_ROLE_SUB_BOND || p->role == CW_ROLE_HYDROGEN) &&
+          cw_segment_hits_box (p->x0, p->y0, p->x1, p->y1, box))
+        return FALSE;
+    }
+  return TRUE;
+}
+
+CwPrim *
+cw_scene_text_free (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
+                    const CwPoint *cands, guint n_cands, double ax, double ay)
+{
+  CwTextMetrics m;
+  guint pick = 0;
+  CwPrim *p;
+
+  cw_text_measure (markup, size, FALSE, 0, 0, 0, &m);
+  for (guint i = 0; i < n_cands; i++)
+    {
+      CwBox box = { cands[i].x - ax * m.w, cands[i].y - ay * m.h, m.w, m.h };
+
+      if (text_fits (scene, &box))
+        {
+          pick = i;
+          break;
+        }
+    }
+  p = cw_scene_add (scene, CW_PRIM_TEXT, role, ink);
+  p->markup = g_strdup (markup);
+  p->size = size;
+  p->box = (CwBox) { cands[pick].x - ax * m.w, cands[pick].y - ay * m.h, m.w, m.h };
+  return p;
+}
+
+void
+cw_placer_init (CwPlacer *pl)
+{
+  pl->segments = g_array_new (FALSE, FALSE, sizeof (CwBox));
+  pl->labels = g_array_new (FALSE, FALSE, sizeof (CwBox));
+}
+
+void
+cw_placer_clear (CwPlacer *pl)
+{
+  g_clear_pointer (&pl->segments, g_array_unref);
+  g_clear_pointer (&pl->labels, g_array_unref);
+}
+
+void
+cw_placer_add_segment (CwPlacer *pl, double x0, double y0, double x1, double y1)
+{
+  CwBox s = { x0, y0, x1 - x0, y1 - y0 };
+
+  g_array_append_val (pl->segments, s);
+}
+
+void
+cw_placer_add_box (CwPlacer *pl, const CwBox *box)
+{
+  g_array_append_val (pl->labels, *box);
+}
+
+gboolean
+cw_placer_collides (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1)
+{
+  CwBox grown = { box->x - 1.5, box->y - 1.5, box->w + 3, box->h + 3 };
+
+  for (guint i = 0; i < pl->labels->len; i++)
+    {
+      const CwBox *o = &g_array_index (pl->labels, CwBox, i);
+
+      if (cw_box_overlap (box, o, 2.0) || cw_segment_hits_box (x0, y0, x1, y1, o))
+        return TRUE;
+    }
+  for (guint i = 0; i < pl->segments->len; i++)
+    {
+      const CwBox *s = &g_array_index (pl->segments, CwBox, i);
+
+      if (cw_segment_hits_box (s->x, s->y, s->x + s->w, s->y + s->h, &grown))
+        return TRUE;
+    }
+  return FALSE;
+}

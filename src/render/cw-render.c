@@ -1,0 +1,185 @@
+#include "config.h"
+
+#include "cw-render.h"
+
+#include <glib/gi18n-lib.h>
+#include <math.h>
+#include <string.h>
+
+#include "cw-figures.h"
+#include "cw-render-private.h"
+
+GQuark
+cw_render_error_quark (void)
+{
+  return g_quark_from_static_string ("cw-render-error-quark");
+}
+
+void
+cw_render_options_init (CwRenderOptions *opt)
+{
+  memset (opt, 0, sizeof *opt);
+  opt->unit = CW_UNIT_KCAL;
+  opt->show_hydrogens = FALSE;
+  opt->dark = FALSE;
+  opt->highlight_sub = -1;
+  opt->temperature_unit = CW_TUNIT_KELVIN;
+}
+
+static const char *const figure_names[] = { "structure", "chairs", "profile", "scan" };
+
+gboolean
+cw_render_figure_from_string (const char *s, CwFigure *fig)
+{
+  if (s == NULL)
+    return FALSE;
+  for (guint i = 0; i < G_N_ELEMENTS (figure_names); i++)
+    if (g_ascii_strcasecmp (s, figure_names[i]) == 0)
+      {
+        *fig = (CwFigure) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+const char *
+cw_render_figure_to_string (CwFigure fig)
+{
+  g_return_val_if_fail ((guint) fig < G_N_ELEMENTS (figure_names), NULL);
+  return figure_names[fig];
+}
+
+void
+cw_render_figure_size (CwFigure fig, double *width, double *height)
+{
+  switch (fig)
+    {
+    case CW_FIGURE_STRUCTURE:
+      *width = 300;
+      *height = 300;
+      break;
+    case CW_FIGURE_CHAIRS:
+      *width = 640;
+      *height = 330;
+      break;
+    case CW_FIGURE_PROFILE:
+    case CW_FIGURE_SCAN:
+    default:
+      *width = 480;
+      *height = 300;
+      break;
+    }
+}
+
+char *
+cw_render_format_energy (double kcal, CwEnergyUnit unit)
+{
+  return cw_render_format_value (cw_energy_from_kcal (kcal, unit), unit);
+}
+
+char *
+cw_render_format_value (double v, CwEnergyUnit unit)
+{
+  g_autofree char *s = g_strdup_printf (unit == CW_UNIT_KJ ? "%.1f" : "%.2f", v);
+
+  /* A real minus sign, and no "-0.00". */
+  if (s[0] == '-')
+    {
+      gboolean zero = strspn (s + 1, "0.") == strlen (s + 1);
+      return zero ? g_strdup (s + 1) : g_strconcat ("−", s + 1, NULL);
+    }
+  return g_steal_pointer (&s);
+}
+
+char *
+cw_render_format_percent (double fraction)
+{
+  double pct = 100.0 * fraction;
+
+  if (pct > 0 && pct < 0.1)
+    return g_strdup ("&lt;0.1");
+  if (pct < 100 && pct > 99.9)
+    return g_strdup ("&gt;99.9");
+  return g_strdup_printf ("%.1f", pct);
+}
+
+char *
+cw_render_format_k (double K)
+{
+  if (!isfinite (K))
+    return g_strdup ("∞");
+  if (K != 0 && (K < 0.01 || K >= 1000))
+    {
+      int e = (int) floor (log10 (K));
+      double m = K / pow (10, e);
+      return g_strdup_printf ("%.2f × 10<sup>%s%d</sup>", m, e < 0 ? "−" : "", abs (e));
+    }
+  return g_strdup_printf (K < 10 ? "%.3g" : "%.1f", K);
+}
+
+CwScene *
+cw_render_build_figure (CwFigure fig,
+                        const CwData *data,
+                        const CwMolecule *mol,
+                        const CwAnalysis *an,
+                        const CwRenderOptions *opt,
+                        double width,
+                        double height)
+{
+  CwScene *scene;
+
+  if (fig != CW_FIGURE_STRUCTURE && an == NULL)
+    {
+      scene = cw_scene_new (width, height);
+      cw_scene_message (scene, _("No analysis"));
+      return scene;
+    }
+  switch (fig)
+    {
+    case CW_FIGURE_STRUCTURE:
+      return cw_structure_build (mol, opt, width, height);
+    case CW_FIGURE_CHAIRS:
+      return cw_chairs_build (mol, an, opt, width, height);
+    case CW_FIGURE_PROFILE:
+      return cw_profile_build (data, mol, an, opt, width, height);
+    case CW_FIGURE_SCAN:
+    default:
+      return cw_scan_build (data, mol, an, opt, width, height);
+    }
+}
+
+void
+cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol,
+                  const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
+{
+  double w0, h0, s;
+  double bg[3];
+  g_autoptr (CwScene) scene = NULL;
+
+  g_return_if_fail (cr != NULL && mol != NULL && opt != NULL);
+  if (width <= 1 || height <= 1)
+    return;
+  /* Lay out at the design size or larger, then scale uniformly into the box, so text keeps its
+   * proportions and the extra room goes to the figure. */
+  cw_render_figure_size (fig, &w0, &h0);
+  s = MIN (width / w0, height / h0);
+  scene = cw_render_build_figure (fig, data, mol, an, opt, width / s, height / s);
+
+  cairo_save (cr);
+  cw_palette_get (CW_INK_BACKGROUND, opt->dark, bg);
+  cairo_set_source_rgb (cr, bg[0], bg[1], bg[2]);
+  cairo_rectangle (cr, 0, 0, width, height);
+  cairo_fill (cr);
+  s = MIN (width / scene->width, height / scene->height);
+  cairo_translate (cr, 0.5 * (width - s * scene->width), 0.5 * (height - s * scene->height));
+  cairo_scale (cr, s, s);
+  cairo_translate (cr, -scene->origin_x, -scene->origin_y);
+  cw_scene_paint (scene, cr, opt->dark);
+  cairo_restore (cr);
+}
+
+const char *
+cw_render_version (void)
+{
+  return PACKAGE_VERSION;
+}

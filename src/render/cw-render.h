@@ -1,0 +1,59 @@
+#pragma once
+
+#include <cairo.h>
+
+#include "cw-core.h"
+
+G_BEGIN_DECLS
+
+#define CW_RENDER_ERROR (cw_render_error_quark ())
+
+typedef enum
+{
+  CW_RENDER_ERROR_FORMAT,   /* unknown file extension or paper size */
+  CW_RENDER_ERROR_IO,       /* the file could not be written */
+  CW_RENDER_ERROR_DRAW,     /* Cairo reported an error */
+  CW_RENDER_ERROR_ANALYSIS  /* the document could not be analysed */
+} CwRenderError;
+
+GQuark cw_render_error_quark (void);
+
+typedef struct
+{
+  CwEnergyUnit unit;
+  gboolean show_hydrogens;
+  gboolean dark;          /* screen only; exports always light */
+  int highlight_sub;      /* -1 none */
+  CwTemperatureUnit temperature_unit; /* axis of the scan figure */
+} CwRenderOptions;
+
+typedef enum
+{
+  CW_FIGURE_STRUCTURE,
+  CW_FIGURE_CHAIRS,
+  CW_FIGURE_PROFILE,
+  CW_FIGURE_SCAN
+} CwFigure;
+
+/* clang-format off */
+void        cw_render_options_init (CwRenderOptions *opt);
+/* Draws into the box (0,0,width,height) in user units, background included; cairo state left as
+ * found. an may be NULL for the structure figure. */
+void        cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol,
+                              const CwAnalysis *an, const CwRenderOptions *opt, double width, double height);
+/* Format from the extension (.png, .svg, .pdf); atomic: temporary file, then rename. dpi is used
+ * for PNG only. Always on white. */
+gboolean    cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc,
+                                     const CwRenderOptions *opt, const char *path, double dpi, GError **error);
+/* One-page PDF report; paper is "a4" or "letter". */
+gboolean    cw_render_export_report (const CwData *data, const CwDocument *doc, const char *paper,
+                                     const char *path, GError **error);
+/* The report drawn onto any cairo_t with a page of width × height points (used by export and tests). */
+void        cw_render_report (cairo_t *cr, const CwData *data, const CwDocument *doc,
+                              const CwAnalysis *an, double width, double height);
+gboolean    cw_render_figure_from_string (const char *s, CwFigure *fig);
+const char *cw_render_figure_to_string (CwFigure fig);
+const char *cw_render_version (void);
+/* clang-format on */
+
+G_END_DECLS
