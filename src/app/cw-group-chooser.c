@@ -279,6 +279,7 @@ cw_group_chooser_set_group (CwGroupChooser *self,
 {
   g_autofree char *markup = NULL;
   g_autofree char *value = NULL;
+  g_autofree char *escaped = NULL;
 
   g_return_if_fail (CW_IS_GROUP_CHOOSER (self));
 
@@ -289,7 +290,9 @@ cw_group_chooser_set_group (CwGroupChooser *self,
       return;
     }
   value = cw_group_chooser_dup_value_text (group, self->unit);
-  markup = g_strdup_printf ("<b>%s</b>  <small>%s</small>", group->markup ? group->markup : group->label, value);
+  /* The plain label (Unicode subscripts): Pango 1.50 warns about <sub> in an ellipsized label. */
+  escaped = g_markup_escape_text (group->label, -1);
+  markup = g_strdup_printf ("<b>%s</b>  %s", escaped, value);
   gtk_label_set_markup (self->button_label, markup);
   gtk_widget_set_tooltip_text (GTK_WIDGET (self->button), group->source);
 }

@@ -330,14 +330,21 @@ save_to_action (GtkWidget  *widget,
 
 /* ---- closing with unsaved changes ----------------------------------------------------- */
 
-static void
-unsaved_response_cb (GtkDialog *dialog,
-                     int        response,
-                     CwWindow  *self)
+typedef struct
 {
-  self->pending_dialog = NULL;
-  gtk_window_destroy (GTK_WINDOW (dialog));
-  switch (response)
+  CwWindow *self;
+  int response;
+} CloseAnswer;
+
+/* Runs after the dialog has gone: closing the window inside the dialog's own
+ * response emission would finalize the parent before the dialog lets go of it. */
+static gboolean
+apply_close_answer_cb (gpointer data)
+{
+  CloseAnswer *answer = data;
+  CwWindow *self = answer->self;
+
+  switch (answer->response)
     {
     case GTK_RESPONSE_REJECT: /* discard */
       self->close_confirmed = TRUE;
@@ -351,6 +358,23 @@ unsaved_response_cb (GtkDialog *dialog,
     default:
       break;
     }
+  g_object_unref (self);
+  g_free (answer);
+  return G_SOURCE_REMOVE;
+}
+
+static void
+unsaved_response_cb (GtkDialog *dialog,
+                     int        response,
+                     CwWindow  *self)
+{
+  CloseAnswer *answer = g_new0 (CloseAnswer, 1);
+
+  self->pending_dialog = NULL;
+  gtk_window_destroy (GTK_WINDOW (dialog));
+  answer->self = g_object_ref (self);
+  answer->response = response;
+  g_idle_add (apply_close_answer_cb, answer);
 }
 
 /* Returns TRUE when the close must wait for the user's answer. */

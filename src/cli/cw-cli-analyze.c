@@ -221,7 +221,7 @@ cw_cli_analysis_json (const CwDocument *doc, const CwMolecule *mol, const CwAnal
 }
 
 static void
-print_csv (const CwDocument *doc, const CwMolecule *mol, const CwAnalysis *an)
+print_csv (const CwDocument *doc, const CwMolecule *mol, const CwAnalysis *an, gboolean header)
 {
   g_autofree char *config = cw_molecule_dup_configuration (mol);
   g_autofree char *spec = cw_molecule_dup_spec (mol);
@@ -229,13 +229,13 @@ print_csv (const CwDocument *doc, const CwMolecule *mol, const CwAnalysis *an)
 
   for (int i = 0; i < an->n_flags; i++)
     g_string_append_printf (codes, "%s%s", i ? ";" : "", cw_flag_code_to_string (an->flags[i].code));
-  printf ("ring,configuration,temperature_k,delta_g_kcal_mol,delta_g_sigma_kcal_mol,K,"
+  if (header)
+    printf ("ring,configuration,temperature_k,delta_g_kcal_mol,delta_g_sigma_kcal_mol,K,"
           "population_chair1,population_chair2,population_chair1_low,population_chair1_high,"
           "major_chair,flags\n");
   printf ("\"%s\",\"%s\",%.2f,%.4f,%.4f,%.6g,%.6f,%.6f,%.6f,%.6f,%d,\"%s\"\n", spec, config,
           an->temperature, an->delta_g, an->sigma, an->K, an->pop[0], an->pop[1], an->pop_low[0],
           an->pop_high[0], an->major + 1, codes->str);
-  printf ("# %s\n", cw_caution_text ());
   g_string_free (codes, TRUE);
 }
 
@@ -246,9 +246,8 @@ cw_cli_analyze (int argc, char **argv)
   g_autoptr (GOptionContext) context = g_option_context_new (_("[DOCUMENT.json] — both chairs, every term, ΔG°, K and populations"));
   g_autoptr (GError) error = NULL;
   g_autoptr (CwData) data = NULL;
-  g_autoptr (CwDocument) doc = NULL;
-  CwConditions cond;
-  CwAnalysis an;
+  g_autoptr (GPtrArray) docs = NULL;
+  g_autoptr (cJSON) array = NULL;
   int code = CW_EXIT_OK;
 
   cw_cli_input_add_options (context, &input, TRUE);
@@ -258,21 +257,42 @@ cw_cli_analyze (int argc, char **argv)
     return cw_cli_usage_error (context, "analyze", _("too many arguments"));
   if (input.json && input.csv)
     return cw_cli_usage_error (context, "analyze", _("choose one of --json and --csv"));
-  doc = cw_cli_input_load (&input, argc > 1 ? argv[1] : NULL, &data, &code);
-  if (doc == NULL)
+  docs = cw_cli_input_load_all (&input, argc > 1 ? argv[1] : NULL, &data, &code);
+  if (docs == NULL)
     return code;
-  cw_document_get_conditions (doc, &cond);
-  if (!cw_analyze (data, cw_document_peek_molecule (doc), &cond, &an, &error))
-    return cw_cli_error ("analyze", CW_EXIT_ANALYSIS, "%s", error->message);
-  if (input.json)
+  if (input.json && docs->len > 1)
+    array = cJSON_CreateArray ();
+  for (guint i = 0; i < docs->len; i++)
     {
-      g_autoptr (cJSON) o = cw_cli_analysis_json (doc, cw_document_peek_molecule (doc), &an);
-      g_autofree char *s = cJSON_Print (o);
+      const CwDocument *doc = g_ptr_array_index (docs, i);
+      const CwMolecule *mol = cw_document_peek_molecule (doc);
+      CwConditions cond;
+      CwAnalysis an;
+
+      cw_document_get_conditions (doc, &cond);
+      if (!cw_analyze (data, mol, &cond, &an, &error))
+        return cw_cli_error ("analyze", CW_EXIT_ANALYSIS, "%s", error->message);
+      if (docs->len > 1 && !input.json)
+        printf (_("%s── cis/trans isomer %u of %u ──\n"), i ? "\n" : "", i + 1, docs->len);
+      if (array != NULL)
+        cJSON_AddItemToArray (array, cw_cli_analysis_json (doc, mol, &an));
+      else if (input.json)
+        {
+          g_autoptr (cJSON) o = cw_cli_analysis_json (doc, mol, &an);
+          g_autofree char *s = cJSON_Print (o);
+          printf ("%s\n", s);
+        }
+      else if (input.csv)
+        print_csv (doc, mol, &an, i == 0);
+      else
+        print_text (doc, mol, &an);
+    }
+  if (array != NULL)
+    {
+      g_autofree char *s = cJSON_Print (array);
       printf ("%s\n", s);
     }
-  else if (input.csv)
-    print_csv (doc, cw_document_peek_molecule (doc), &an);
-  else
-    print_text (doc, cw_document_peek_molecule (doc), &an);
+  if (input.csv)
+    printf ("# %s\n", cw_caution_text ());
   return CW_EXIT_OK;
 }

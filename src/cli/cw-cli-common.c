@@ -76,7 +76,17 @@ document_from_molecule (const CwMolecule *mol)
   return doc;
 }
 
-static CwDocument *
+static GPtrArray *
+one_document (CwDocument *doc)
+{
+  GPtrArray *docs = g_ptr_array_new_with_free_func ((GDestroyNotify) cw_document_free);
+
+  if (doc != NULL)
+    g_ptr_array_add (docs, doc);
+  return docs;
+}
+
+static GPtrArray *
 load_source (CwCliInput *input, const char *path, CwData *data, const char *cmd, int *exit_code)
 {
   g_autoptr (GError) error = NULL;
@@ -96,7 +106,7 @@ load_source (CwCliInput *input, const char *path, CwData *data, const char *cmd,
           *exit_code = cw_cli_error (cmd, CW_EXIT_USAGE, "--ring: %s", error->message);
           return NULL;
         }
-      return document_from_molecule (mol);
+      return one_document (document_from_molecule (mol));
     }
 #ifdef CW_HAVE_SMILES
   if (input->smiles != NULL)
@@ -108,19 +118,27 @@ load_source (CwCliInput *input, const char *path, CwData *data, const char *cmd,
           *exit_code = cw_cli_error (cmd, CW_EXIT_ANALYSIS, "--smiles: %s", error->message);
           return NULL;
         }
+      GPtrArray *docs = one_document (NULL);
       if (notes->len > 0)
         fprintf (stderr, "chairwise-calc %s: %s\n", cmd, notes->str);
-      if (mols->len > 1)
-        fprintf (stderr, _("chairwise-calc %s: %u stereoisomers are possible; analysing the first "
-                           "(see “chairwise-calc isomers” for all)\n"), cmd, mols->len);
-      return document_from_molecule (g_ptr_array_index (mols, 0));
+      for (guint i = 0; i < mols->len; i++)
+        {
+          CwDocument *doc = document_from_molecule (g_ptr_array_index (mols, i));
+          g_autofree char *smiles = cw_smiles_write (g_ptr_array_index (mols, i));
+          cw_document_set_title (doc, smiles);
+          g_ptr_array_add (docs, doc);
+        }
+      return docs;
     }
 #endif
   {
     CwDocument *doc = cw_document_new_from_file (path, data->groups, &error);
     if (doc == NULL)
-      *exit_code = cw_cli_error (cmd, CW_EXIT_ANALYSIS, "%s", error->message);
-    return doc;
+      {
+        *exit_code = cw_cli_error (cmd, CW_EXIT_ANALYSIS, "%s", error->message);
+        return NULL;
+      }
+    return one_document (doc);
   }
 }
 
@@ -165,12 +183,12 @@ apply_conditions (CwCliInput *input, CwDocument *doc, const char *cmd, int *exit
   return TRUE;
 }
 
-CwDocument *
-cw_cli_input_load (CwCliInput *input, const char *path, CwData **data_out, int *exit_code)
+GPtrArray *
+cw_cli_input_load_all (CwCliInput *input, const char *path, CwData **data_out, int *exit_code)
 {
   g_autoptr (GError) error = NULL;
   g_autoptr (CwData) data = NULL;
-  g_autoptr (CwDocument) doc = NULL;
+  g_autoptr (GPtrArray) docs = NULL;
   const char *cmd = g_get_prgname () ? g_get_prgname () : "";
 
   data = cw_data_new_from_dir (input->data_dir, &error);
@@ -180,9 +198,27 @@ cw_cli_input_load (CwCliInput *input, const char *path, CwData **data_out, int *
                                  error->message);
       return NULL;
     }
-  doc = load_source (input, path, data, cmd, exit_code);
-  if (doc == NULL || !apply_conditions (input, doc, cmd, exit_code))
+  docs = load_source (input, path, data, cmd, exit_code);
+  if (docs == NULL)
     return NULL;
+  for (guint i = 0; i < docs->len; i++)
+    if (!apply_conditions (input, g_ptr_array_index (docs, i), cmd, exit_code))
+      return NULL;
   *data_out = g_steal_pointer (&data);
-  return g_steal_pointer (&doc);
+  return g_steal_pointer (&docs);
+}
+
+CwDocument *
+cw_cli_input_load (CwCliInput *input, const char *path, CwData **data_out, int *exit_code)
+{
+  g_autoptr (GPtrArray) docs = cw_cli_input_load_all (input, path, data_out, exit_code);
+  const char *cmd = g_get_prgname () ? g_get_prgname () : "";
+
+  if (docs == NULL)
+    return NULL;
+  if (docs->len > 1)
+    fprintf (stderr, _("chairwise-calc %s: the SMILES leaves %u cis/trans isomers open; using "
+                       "the first, %s (see “chairwise-calc isomers” for all)\n"),
+             cmd, docs->len, cw_document_get_title (g_ptr_array_index (docs, 0)));
+  return g_ptr_array_steal_index (docs, 0);
 }

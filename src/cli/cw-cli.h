@@ -42,6 +42,9 @@ G_DEFINE_AUTO_CLEANUP_CLEAR_FUNC (CwCliInput, cw_cli_input_clear)
 /* Loads the tables and the document (from the positional path, --smiles or --ring), applies
  * --temperature/--units/--solvent. On failure prints the message and sets *exit_code. */
 CwDocument *cw_cli_input_load (CwCliInput *input, const char *path, CwData **data_out, int *exit_code);
+/* The same, keeping every cis/trans isomer when a SMILES leaves ring stereocentres open
+ * (element-type CwDocument*, owned); each isomer's title is its canonical SMILES. */
+GPtrArray  *cw_cli_input_load_all (CwCliInput *input, const char *path, CwData **data_out, int *exit_code);
 int         cw_cli_error (const char *command, int code, const char *format, ...) G_GNUC_PRINTF (3, 4);
 int         cw_cli_usage_error (GOptionContext *context, const char *command, const char *message);
 
@@ -49,5 +52,10 @@ int         cw_cli_usage_error (GOptionContext *context, const char *command, co
 int cw_cli_analyze (int argc, char **argv);
 int cw_cli_scan (int argc, char **argv);
 int cw_cli_groups (int argc, char **argv);
+int cw_cli_geometry (int argc, char **argv);   /* cw-cli-nmr.c */
+int cw_cli_couplings (int argc, char **argv);  /* cw-cli-nmr.c */
+int cw_cli_reactivity (int argc, char **argv); /* cw-cli-reactivity.c */
+int cw_cli_isomers (int argc, char **argv);    /* cw-cli-smiles.c */
+int cw_cli_batch (int argc, char **argv);      /* cw-cli-smiles.c */
 
 G_END_DECLS

@@ -20,7 +20,8 @@ typedef struct
   double coef[2];
 } CwParam;
 
-#define CW_MAX_PARAMS 192
+#define CW_MAX_PARAMS 96
+#define CW_PARAM_SLOTS 128 /* open-addressing table, a power of two above CW_MAX_PARAMS */
 
 typedef struct
 {
@@ -33,6 +34,7 @@ typedef struct
   gboolean a_thermo[CW_MAX_SUBS];
   CwParam params[CW_MAX_PARAMS];
   int n_params;
+  gint16 slots[CW_PARAM_SLOTS]; /* param index + 1, 0 for empty */
   gboolean any_estimate;
   int estimate_a, estimate_b;
 } CwEngine;
@@ -42,14 +44,23 @@ enum { PARAM_A, PARAM_PAIR, PARAM_FALLBACK_SYN, PARAM_FALLBACK_GAUCHE };
 static void
 add_param (CwEngine *e, int chair, int tag, const void *p1, const void *p2, double sigma, double coef)
 {
-  int i;
+  guint h = (guint) (((guintptr) p1 >> 3) * 2654435761u ^ ((guintptr) p2 >> 3) * 40503u ^ (guint) tag);
+  int i = -1;
 
-  for (i = 0; i < e->n_params; i++)
-    if (e->params[i].tag == tag && e->params[i].p1 == p1 && e->params[i].p2 == p2)
-      break;
-  if (i == e->n_params)
+  for (h &= CW_PARAM_SLOTS - 1; e->slots[h] != 0; h = (h + 1) & (CW_PARAM_SLOTS - 1))
     {
-      /* 12 groups and at most ~45 pair terms per chair stay well inside the table. */
+      CwParam *p = &e->params[e->slots[h] - 1];
+      if (p->tag == tag && p->p1 == p1 && p->p2 == p2)
+        {
+          i = e->slots[h] - 1;
+          break;
+        }
+    }
+  if (i < 0)
+    {
+      i = e->n_params;
+      e->slots[h] = (gint16) (i + 1);
+      /* 12 A-values, 24 vicinal and 24 1,3 pairs and 6 geminal ones stay inside the table. */
       g_assert (e->n_params < CW_MAX_PARAMS);
       e->params[i] = (CwParam) { tag, p1, p2, sigma, { 0, 0 } };
       e->n_params++;
@@ -404,6 +415,16 @@ build_flags (CwEngine *e, CwFlagCode symmetry)
     add_flag (an, CW_FLAG_CUSTOM_GROUP, custom, -1, 0);
 }
 
+static double
+chair_sum (const CwChair *c)
+{
+  double sum = 0;
+
+  for (int k = 0; k < c->n_terms; k++)
+    sum += c->terms[k].energy;
+  return sum;
+}
+
 static void
 finish_thermo (CwEngine *e, CwFlagCode symmetry)
 {
@@ -412,11 +433,7 @@ finish_thermo (CwEngine *e, CwFlagCode symmetry)
   double T = an->temperature, var = 0, mean, lo, hi, dummy;
 
   for (int c = 0; c < 2; c++)
-    {
-      an->chair[c].energy = 0;
-      for (int k = 0; k < an->chair[c].n_terms; k++)
-        an->chair[c].energy += an->chair[c].terms[k].energy;
-    }
+    an->chair[c].energy = chair_sum (&an->chair[c]);
   for (int k = 0; k < e->n_params; k++)
     {
       double d = (e->params[k].coef[1] - e->params[k].coef[0]) * e->params[k].sigma;
@@ -492,6 +509,7 @@ cw_analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond,
   e.cond = cond;
   e.out = out;
   e.n_params = 0;
+  memset (e.slots, 0, sizeof e.slots);
   e.any_estimate = FALSE;
   out->temperature = cond->temperature;
   out->solvent = cond->solvent;
@@ -506,7 +524,11 @@ cw_analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond,
     e.a[i] = cw_group_a_value (mol->subs[i].group, cond->temperature, cond->solvent,
                                &e.a_sigma[i], &e.a_thermo[i]);
   build_terms (&e);
-  symmetry = chair_symmetry (mol, out);
+  /* The energy model is invariant under the chair's symmetry operations, so chairs related by
+   * symmetry always come out equal; only then is the (costlier) exact test needed. */
+  symmetry = CW_N_FLAGS;
+  if (fabs (chair_sum (&out->chair[0]) - chair_sum (&out->chair[1])) < 1e-9)
+    symmetry = chair_symmetry (mol, out);
   finish_thermo (&e, symmetry);
   build_flags (&e, symmetry);
   return TRUE;

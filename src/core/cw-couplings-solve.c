@@ -29,9 +29,9 @@ letters_for (int count)
 void
 cw_multiplet_build (const double *j, int n, double tolerance, double min_resolved, CwMultiplet *out)
 {
-  double v[CW_MULTIPLET_MAX];
-  int counts[CW_MULTIPLET_MAX];
-  int m = 0, groups = 0;
+  double   v[CW_MULTIPLET_MAX];
+  int      counts[CW_MULTIPLET_MAX];
+  int      m = 0, groups = 0;
   GString *pattern = g_string_new (NULL);
   gboolean simple = TRUE;
 
@@ -45,7 +45,7 @@ cw_multiplet_build (const double *j, int n, double tolerance, double min_resolve
   for (int i = 0; i < m;)
     {
       double sum = 0;
-      int k = i;
+      int    k = i;
       while (k < m && v[i] - v[k] <= tolerance)
         sum += v[k++];
       counts[groups] = k - i;
@@ -87,11 +87,16 @@ cw_inverse_status_to_string (CwInverseStatus status)
 {
   switch (status)
     {
-    case CW_INVERSE_OK: return "ok";
-    case CW_INVERSE_ONE_CHAIR: return "one-chair";
-    case CW_INVERSE_OUTSIDE: return "outside";
-    case CW_INVERSE_INSENSITIVE: return "insensitive";
-    default: return "unknown";
+    case CW_INVERSE_OK:
+      return "ok";
+    case CW_INVERSE_ONE_CHAIR:
+      return "one-chair";
+    case CW_INVERSE_OUTSIDE:
+      return "outside";
+    case CW_INVERSE_INSENSITIVE:
+      return "insensitive";
+    default:
+      return "unknown";
     }
 }
 
@@ -114,7 +119,7 @@ chair_values (const CwCouplings *c, int proton, int partner, double value[2], GE
     }
   else
     {
-      int v = cw_couplings_find_vicinal (c, proton, partner);
+      int              v = cw_couplings_find_vicinal (c, proton, partner);
       g_autofree char *a = cw_ring_proton_dup_label (p);
       g_autofree char *b = cw_ring_proton_dup_label (&c->protons[partner]);
 
@@ -132,12 +137,12 @@ chair_values (const CwCouplings *c, int proton, int partner, double value[2], GE
 
 gboolean
 cw_couplings_solve (const CwGeometryData *gd,
-                    const CwCouplings *c,
-                    int proton,
-                    int partner,
-                    double observed,
-                    CwInverseResult *out,
-                    GError **error)
+                    const CwCouplings    *c,
+                    int                   proton,
+                    int                   partner,
+                    double                observed,
+                    CwInverseResult      *out,
+                    GError              **error)
 {
   double tol, x1;
 
@@ -194,23 +199,23 @@ cw_inverse_dup_message (const CwInverseResult *r, CwEnergyUnit unit)
     case CW_INVERSE_OK:
       return g_strdup_printf (_("%.1f Hz lies between chair 1 (%.1f Hz) and chair 2 (%.1f Hz): "
                                 "chair 1 %.0f%%, chair 2 %.0f%%, ΔG° = %.2f %s (chair 2 − chair 1)."),
-                              r->observed, r->chair_value[0], r->chair_value[1], 100 * r->pop[0],
-                              100 * r->pop[1], cw_energy_from_kcal (r->delta_g, unit),
-                              cw_energy_unit_symbol (unit));
+                                 r->observed, r->chair_value[0], r->chair_value[1], 100 * r->pop[0],
+                                 100 * r->pop[1], cw_energy_from_kcal (r->delta_g, unit),
+                                 cw_energy_unit_symbol (unit));
     case CW_INVERSE_ONE_CHAIR:
       return g_strdup_printf (_("%.1f Hz is at the value of chair %d alone (chair 1 %.1f Hz, chair 2 %.1f Hz, "
                                 "within %.1f Hz): that chair dominates; ΔG° cannot be given, only its sign."),
-                              r->observed, r->pop[0] >= 0.5 ? 1 : 2, r->chair_value[0], r->chair_value[1],
-                              r->tolerance);
+                                 r->observed, r->pop[0] >= 0.5 ? 1 : 2, r->chair_value[0], r->chair_value[1],
+                                 r->tolerance);
     case CW_INVERSE_OUTSIDE:
       return g_strdup_printf (_("%.1f Hz is outside what the two chairs can produce (%.1f to %.1f Hz): "
                                 "check the assignment, or the ring is not a pair of chairs (twist-boat, "
                                 "distortion) or the coupling model does not fit this proton."),
-                              r->observed, r->low, r->high);
+                                 r->observed, r->low, r->high);
     case CW_INVERSE_INSENSITIVE:
       return g_strdup_printf (_("The two chairs give nearly the same value (%.1f and %.1f Hz): this "
                                 "measurement cannot tell their populations apart; use another proton."),
-                              r->chair_value[0], r->chair_value[1]);
+                                 r->chair_value[0], r->chair_value[1]);
     default:
       return g_strdup ("");
     }

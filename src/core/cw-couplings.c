@@ -15,8 +15,8 @@ double
 cw_karplus_coupling (const CwKarplusSet *set, double phi, const double *delta_chi, const int *xi, int n)
 {
   const double *p = set->p;
-  double c = cos (phi * DEG);
-  double j = p[0] * c * c + p[1] * c + p[2];
+  double        c = cos (phi * DEG);
+  double        j = p[0] * c * c + p[1] * c + p[2];
 
   for (int i = 0; i < n; i++)
     {
@@ -29,13 +29,12 @@ cw_karplus_coupling (const CwKarplusSet *set, double phi, const double *delta_ch
 
 /* Δχ of an atom at a chair slot (a ring carbon's exocyclic position) seen from its ring carbon. */
 static double
-slot_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int position, CwFace face,
-                double p7, gboolean *beta_known, CwElement *el_out)
+slot_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int position, CwFace face, double p7, gboolean *beta_known, CwElement *el_out)
 {
   const CwSubstituent *s = cw_molecule_get (mol, position, face);
-  double chi_h = cw_geometry_data_electronegativity (gd, CW_EL_H);
-  CwFragmentInfo info;
-  double beta = 0;
+  double               chi_h = cw_geometry_data_electronegativity (gd, CW_EL_H);
+  CwFragmentInfo       info;
+  double               beta = 0;
 
   *beta_known = TRUE;
   if (s == NULL)
@@ -54,8 +53,7 @@ slot_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int position, C
 /* Δχ of ring carbon `carbon` seen from its neighbour `from`: its β-atoms are its other ring
  * neighbour and whatever sits on its two slots. */
 static double
-ring_carbon_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int carbon, int from,
-                       double p7, gboolean *beta_known)
+ring_carbon_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int carbon, int from, double p7, gboolean *beta_known)
 {
   double chi_h = cw_geometry_data_electronegativity (gd, CW_EL_H);
   double chi_c = cw_geometry_data_electronegativity (gd, CW_EL_C);
@@ -65,7 +63,7 @@ ring_carbon_delta_chi (const CwGeometryData *gd, const CwMolecule *mol, int carb
   for (int f = 0; f < 2; f++)
     {
       const CwSubstituent *s = cw_molecule_get (mol, carbon, (CwFace) f);
-      CwFragmentInfo info;
+      CwFragmentInfo       info;
       if (s == NULL)
         continue;
       cw_fragment_info (s->group, &info);
@@ -85,25 +83,26 @@ static int
 xi_sign (const CwChairGeometry *g, int h, int ca, int cb, int s)
 {
   const double *H = g->atoms[h].xyz, *A = g->atoms[ca].xyz, *B = g->atoms[cb].xyz, *S = g->atoms[s].xyz;
-  double u[3], v[3], w[3];
+  double        u[3], v[3], w[3];
 
   for (int i = 0; i < 3; i++)
     u[i] = H[i] - A[i], v[i] = S[i] - A[i], w[i] = B[i] - A[i];
   return ((u[1] * v[2] - u[2] * v[1]) * w[0] + (u[2] * v[0] - u[0] * v[2]) * w[1] +
-          (u[0] * v[1] - u[1] * v[0]) * w[2]) >= 0 ? 1 : -1;
+          (u[0] * v[1] - u[1] * v[0]) * w[2]) >= 0
+           ? 1
+           : -1;
 }
 
 /* The α-substituents on carbon `pa` (bearing proton slot face_a), looking along pa→pb. */
 static void
-collect_alpha (const CwGeometryData *gd, const CwMolecule *mol, const CwCouplings *c, int pa,
-               CwFace face_a, int pb, double p7, CwVicinalCoupling *v)
+collect_alpha (const CwGeometryData *gd, const CwMolecule *mol, const CwCouplings *c, int pa, CwFace face_a, int pb, double p7, CwVicinalCoupling *v)
 {
-  int other_ring = (ring_neighbour (pa, 1) == pb) ? ring_neighbour (pa, -1) : ring_neighbour (pa, 1);
-  CwFace other_face = (face_a == CW_FACE_UP) ? CW_FACE_DOWN : CW_FACE_UP;
+  int                   other_ring = (ring_neighbour (pa, 1) == pb) ? ring_neighbour (pa, -1) : ring_neighbour (pa, 1);
+  CwFace                other_face = (face_a == CW_FACE_UP) ? CW_FACE_DOWN : CW_FACE_UP;
   CwKarplusSubstituent *k;
-  gboolean known;
-  CwElement el;
-  double dchi;
+  gboolean              known;
+  CwElement             el;
+  double                dchi;
 
   /* The ring carbon beyond pa. */
   k = &v->subs[v->n_subs++];
@@ -152,13 +151,12 @@ choose_set (const CwGeometryData *gd, const char *set_id, int n_subs)
 }
 
 static void
-compute_vicinal (const CwGeometryData *gd, const CwMolecule *mol, const char *set_id,
-                 CwCouplings *c, int ia, int ib)
+compute_vicinal (const CwGeometryData *gd, const CwMolecule *mol, const char *set_id, CwCouplings *c, int ia, int ib)
 {
   const CwRingProton *a = &c->protons[ia], *b = &c->protons[ib];
-  CwVicinalCoupling *v = &c->vicinal[c->n_vicinal];
-  double p7 = cw_geometry_data_find_set (gd, NULL)->p[6];
-  double dchi[CW_MAX_ALPHA_SUBS];
+  CwVicinalCoupling  *v = &c->vicinal[c->n_vicinal];
+  double              p7 = cw_geometry_data_find_set (gd, NULL)->p[6];
+  double              dchi[CW_MAX_ALPHA_SUBS];
 
   memset (v, 0, sizeof *v);
   v->proton_a = ia;
@@ -182,7 +180,7 @@ compute_vicinal (const CwGeometryData *gd, const CwMolecule *mol, const char *se
   for (int ch = 0; ch < 2; ch++)
     {
       const CwChairGeometry *g = &c->geometry[ch];
-      int xi[CW_MAX_ALPHA_SUBS];
+      int                    xi[CW_MAX_ALPHA_SUBS];
 
       for (int i = 0; i < v->n_subs; i++)
         xi[i] = v->subs[i].xi[ch];
@@ -203,13 +201,13 @@ summarise_proton (const CwGeometryData *gd, CwCouplings *c, CwRingProton *p)
   for (int ch = 0; ch < 3; ch++)
     {
       double j[5];
-      int n = 0;
+      int    n = 0;
       double width = 0;
 
       for (int i = 0; i < p->n_vicinal; i++)
         {
           const CwVicinalCoupling *v = &c->vicinal[p->vicinal[i]];
-          double value = (ch < 2) ? v->j[ch] : v->j_avg;
+          double                   value = (ch < 2) ? v->j[ch] : v->j_avg;
           j[n++] = value;
           width += value;
         }
@@ -247,12 +245,12 @@ list_protons (const CwMolecule *mol, CwCouplings *c)
 
 gboolean
 cw_couplings_compute (const CwGeometryData *gd,
-                      const CwMolecule *mol,
-                      const double pop[2],
-                      double temperature,
-                      const char *set_id,
-                      CwCouplings *out,
-                      GError **error)
+                      const CwMolecule     *mol,
+                      const double          pop[2],
+                      double                temperature,
+                      const char           *set_id,
+                      CwCouplings          *out,
+                      GError              **error)
 {
   g_return_val_if_fail (gd != NULL && mol != NULL && pop != NULL && out != NULL, FALSE);
   if (set_id != NULL && g_strcmp0 (set_id, CW_KARPLUS_BY_COUNT) != 0 &&
@@ -331,8 +329,8 @@ cw_ring_proton_dup_label (const CwRingProton *p)
 int
 cw_couplings_parse_proton (const CwCouplings *c, const char *text, GError **error)
 {
-  const char *p = text;
-  int position, idx = -1, n = 0;
+  const char      *p = text;
+  int              position, idx = -1, n = 0;
   g_autofree char *rest = NULL;
 
   g_return_val_if_fail (c != NULL && text != NULL, -1);
@@ -346,7 +344,7 @@ cw_couplings_parse_proton (const CwCouplings *c, const char *text, GError **erro
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_PARSE,
                    _("“%s” does not name a ring proton: give the carbon (1 to 6) and the face, e.g. “2u” or “2d”"),
-                   text);
+                      text);
       return -1;
     }
   position = *p++ - '0';
@@ -364,7 +362,7 @@ cw_couplings_parse_proton (const CwCouplings *c, const char *text, GError **erro
       else
         g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
                      _("Carbon %d carries two hydrogens: add the face, e.g. “%du” or “%dd”"),
-                     position, position, position);
+                        position, position, position);
       return -1;
     }
   if (g_strcmp0 (rest, "u") == 0 || g_strcmp0 (rest, "up") == 0)

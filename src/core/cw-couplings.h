@@ -25,81 +25,81 @@ G_BEGIN_DECLS
 /* One non-H α-substituent of an H–C–C–H fragment and its Karplus correction. */
 typedef struct
 {
-  int position;     /* ring carbon it is bonded to */
-  int sub;          /* molecule substituent index, or -1 when it is a ring carbon */
-  int ring_carbon;  /* when sub == -1: the ring carbon's number, else 0 */
+  int       position;    /* ring carbon it is bonded to */
+  int       sub;         /* molecule substituent index, or -1 when it is a ring carbon */
+  int       ring_carbon; /* when sub == -1: the ring carbon's number, else 0 */
   CwElement element;
-  double delta_chi; /* Δχ(α) − P7 Σ Δχ(β) */
-  int xi[2];        /* ±1 in chair 1 and chair 2 */
-  gboolean beta_known; /* FALSE when the group's fragment could not be read (β terms left out) */
+  double    delta_chi;  /* Δχ(α) − P7 Σ Δχ(β) */
+  int       xi[2];      /* ±1 in chair 1 and chair 2 */
+  gboolean  beta_known; /* FALSE when the group's fragment could not be read (β terms left out) */
 } CwKarplusSubstituent;
 
 typedef struct
 {
-  int proton_a;          /* indexes into CwCouplings.protons; a is on the lower-numbered carbon of the bond */
-  int proton_b;
-  double torsion[2];     /* H–C–C–H, degrees, in chair 1 and chair 2 */
-  double j[2];           /* Hz */
-  double j_avg;          /* population-weighted */
+  int                  proton_a; /* indexes into CwCouplings.protons; a is on the lower-numbered carbon of the bond */
+  int                  proton_b;
+  double               torsion[2]; /* H–C–C–H, degrees, in chair 1 and chair 2 */
+  double               j[2];       /* Hz */
+  double               j_avg;      /* population-weighted */
   CwKarplusSubstituent subs[CW_MAX_ALPHA_SUBS];
-  int n_subs;
-  const CwKarplusSet *set;
+  int                  n_subs;
+  const CwKarplusSet  *set;
 } CwVicinalCoupling;
 
 /* A first-order multiplet: the pattern ("s", "d", "t", "dd", "tt", "td", "ddd", "m", ...) and its
  * distinct couplings, largest first, in Hz (magnitudes). */
 typedef struct
 {
-  char pattern[16];
+  char   pattern[16];
   double j[CW_MULTIPLET_MAX];
-  int n_j;
+  int    n_j;
 } CwMultiplet;
 
 typedef struct
 {
-  int position;          /* ring carbon 1..6 */
-  CwFace face;
-  gboolean axial[2];     /* in chair 1, chair 2 */
-  int vicinal[4];        /* indexes into CwCouplings.vicinal */
-  int n_vicinal;
-  int geminal;           /* the other proton on the same carbon, or -1 */
-  double width[2];       /* sum of the vicinal couplings, Hz, per chair */
-  double width_avg;
+  int         position; /* ring carbon 1..6 */
+  CwFace      face;
+  gboolean    axial[2];   /* in chair 1, chair 2 */
+  int         vicinal[4]; /* indexes into CwCouplings.vicinal */
+  int         n_vicinal;
+  int         geminal;  /* the other proton on the same carbon, or -1 */
+  double      width[2]; /* sum of the vicinal couplings, Hz, per chair */
+  double      width_avg;
   CwMultiplet multiplet[3]; /* chair 1, chair 2, averaged; the geminal 2J is included */
 } CwRingProton;
 
 typedef struct
 {
-  double temperature;    /* K, as given */
-  double pop[2];         /* as given */
-  CwChairGeometry geometry[2];
-  CwRingProton protons[CW_MAX_RING_PROTONS];
-  int n_protons;
+  double            temperature; /* K, as given */
+  double            pop[2];      /* as given */
+  CwChairGeometry   geometry[2];
+  CwRingProton      protons[CW_MAX_RING_PROTONS];
+  int               n_protons;
   CwVicinalCoupling vicinal[CW_MAX_VICINAL];
-  int n_vicinal;
-  double geminal;        /* 2J used for ring CH2 protons, Hz */
-  const char *geminal_source;
-  const char *set_request;  /* the set id asked for, or CW_KARPLUS_BY_COUNT */
-  gboolean fragment_unknown; /* some substituent's β-atoms are unknown (its corrections are rougher) */
+  int               n_vicinal;
+  double            geminal; /* 2J used for ring CH2 protons, Hz */
+  const char       *geminal_source;
+  const char       *set_request;      /* the set id asked for, or CW_KARPLUS_BY_COUNT */
+  gboolean          fragment_unknown; /* some substituent's β-atoms are unknown (its corrections are rougher) */
 } CwCouplings;
 
 typedef enum
 {
-  CW_INVERSE_OK,          /* populations found strictly between 0 and 1 */
-  CW_INVERSE_ONE_CHAIR,   /* at or just beyond one chair's value, within the tolerance */
-  CW_INVERSE_OUTSIDE,     /* beyond what the two chairs can produce */
-  CW_INVERSE_INSENSITIVE  /* the chairs give nearly the same value: the measurement cannot decide */
+  CW_INVERSE_OK,         /* populations found strictly between 0 and 1 */
+  CW_INVERSE_ONE_CHAIR,  /* at or just beyond one chair's value, within the tolerance */
+  CW_INVERSE_OUTSIDE,    /* beyond what the two chairs can produce */
+  CW_INVERSE_INSENSITIVE /* the chairs give nearly the same value: the measurement cannot decide */
 } CwInverseStatus;
 
 typedef struct
 {
   CwInverseStatus status;
-  double observed;       /* Hz */
-  double chair_value[2]; /* the coupling (or width) in the pure chairs, Hz */
-  double pop[2];         /* solved populations; NaN when OUTSIDE or INSENSITIVE */
-  double delta_g;        /* G(chair 2) − G(chair 1), kcal/mol; NaN unless OK */
-  double low, high;      /* the range the chairs span, Hz */
-  double tolerance;      /* Hz, from the table */
+  double          observed;       /* Hz */
+  double          chair_value[2]; /* the coupling (or width) in the pure chairs, Hz */
+  double          pop[2];         /* solved populations; NaN when OUTSIDE or INSENSITIVE */
+  double          delta_g;        /* G(chair 2) − G(chair 1), kcal/mol; NaN unless OK */
+  double          low, high;      /* the range the chairs span, Hz */
+  double          tolerance;      /* Hz, from the table */
 } CwInverseResult;
 
 /* clang-format off */

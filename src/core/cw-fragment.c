@@ -18,23 +18,23 @@
 typedef struct
 {
   CwElement el;
-  gboolean aromatic;
-  gboolean bracket;
-  int bracket_h;
+  gboolean  aromatic;
+  gboolean  bracket;
+  int       bracket_h;
 } Atom;
 
 typedef struct
 {
-  int a, b;
+  int    a, b;
   double order;
 } Bond;
 
 typedef struct
 {
   Atom atoms[MAX_ATOMS];
-  int n_atoms;
+  int  n_atoms;
   Bond bonds[MAX_BONDS];
-  int n_bonds;
+  int  n_bonds;
 } Graph;
 
 static gboolean
@@ -73,7 +73,7 @@ read_atom (const char *smiles, const char **pp, Atom *a, GError **error)
   if (*p == '[')
     {
       const char *start;
-      int isotope = 0;
+      int         isotope = 0;
 
       p++;
       while (g_ascii_isdigit (*p))
@@ -133,15 +133,15 @@ add_bond (Graph *g, int a, int b, double order, int pending)
     order = pending;
   else if (g->atoms[a].aromatic && g->atoms[b].aromatic)
     order = 1.5;
-  g->bonds[g->n_bonds++] = (Bond) { a, b, order };
+  g->bonds[g->n_bonds++] = (Bond){ a, b, order };
   return TRUE;
 }
 
 static gboolean
 parse_graph (const char *smiles, Graph *g, GError **error)
 {
-  int stack[MAX_ATOMS], depth = 0, prev = -1, pending = 0;
-  int ring_open[100], ring_pending[100];
+  int         stack[MAX_ATOMS], depth = 0, prev = -1, pending = 0;
+  int         ring_open[100], ring_pending[100];
   const char *p = smiles;
 
   for (int i = 0; i < 100; i++)
@@ -161,7 +161,9 @@ parse_graph (const char *smiles, Graph *g, GError **error)
           p++;
         }
       else if (strchr ("-=#:/\\", *p) != NULL)
-        pending = (*p == '=') ? 2 : (*p == '#') ? 3 : 1, p++;
+        pending = (*p == '=') ? 2 : (*p == '#') ? 3
+                                                : 1,
+        p++;
       else if (g_ascii_isdigit (*p) || *p == '%')
         {
           int label = *p - '0';
@@ -213,16 +215,34 @@ implicit_hydrogens (CwElement el, double bond_sum)
   static const int carbon[] = { 4 }, nitrogen[] = { 3, 5 }, oxygen[] = { 2 },
                    sulfur[] = { 2, 4, 6 }, halogen[] = { 1 };
   const int *v;
-  int n, s = (int) floor (bond_sum + 0.01);
+  int        n, s = (int) floor (bond_sum + 0.01);
 
   switch (el)
     {
-    case CW_EL_C: v = carbon, n = 1; break;
-    case CW_EL_N: v = nitrogen, n = 2; break;
-    case CW_EL_O: v = oxygen, n = 1; break;
-    case CW_EL_S: v = sulfur, n = 3; break;
-    case CW_EL_F: case CW_EL_CL: case CW_EL_BR: case CW_EL_I: v = halogen, n = 1; break;
-    case CW_EL_H: case CW_EL_D: case CW_EL_HG: case CW_EL_SI: case CW_EL_SN: case CW_N_ELEMENTS:
+    case CW_EL_C:
+      v = carbon, n = 1;
+      break;
+    case CW_EL_N:
+      v = nitrogen, n = 2;
+      break;
+    case CW_EL_O:
+      v = oxygen, n = 1;
+      break;
+    case CW_EL_S:
+      v = sulfur, n = 3;
+      break;
+    case CW_EL_F:
+    case CW_EL_CL:
+    case CW_EL_BR:
+    case CW_EL_I:
+      v = halogen, n = 1;
+      break;
+    case CW_EL_H:
+    case CW_EL_D:
+    case CW_EL_HG:
+    case CW_EL_SI:
+    case CW_EL_SN:
+    case CW_N_ELEMENTS:
     default:
       return 0;
     }
@@ -235,9 +255,9 @@ implicit_hydrogens (CwElement el, double bond_sum)
 gboolean
 cw_fragment_parse (const char *smiles, CwFragmentInfo *out, GError **error)
 {
-  Graph g;
+  Graph  g;
   double sum = 1.0; /* the bond to the ring carbon */
-  int explicit_h = 0;
+  int    explicit_h = 0;
 
   g_return_val_if_fail (smiles != NULL && out != NULL, FALSE);
   memset (&g, 0, sizeof g);
@@ -248,8 +268,9 @@ cw_fragment_parse (const char *smiles, CwFragmentInfo *out, GError **error)
   for (int i = 0; i < g.n_bonds; i++)
     {
       const Bond *b = &g.bonds[i];
-      int other = (b->a == 0) ? b->b : (b->b == 0) ? b->a : -1;
-      CwElement el;
+      int         other = (b->a == 0) ? b->b : (b->b == 0) ? b->a
+                                                           : -1;
+      CwElement   el;
 
       if (other < 0)
         continue;

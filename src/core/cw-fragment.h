@@ -14,9 +14,9 @@ typedef struct
   /* Heavy atoms bonded to the first atom, other than the ring carbon (the β-substituents of the
    * Karplus equation). An atom joined by a double or triple bond is listed once. */
   CwElement neighbours[CW_FRAGMENT_MAX_NEIGHBOURS];
-  int n_neighbours;
-  int n_hydrogens;      /* hydrogens on the first atom (implicit or in brackets) */
-  gboolean from_smiles; /* FALSE: no usable fragment; first_atom from the group, nothing else known */
+  int       n_neighbours;
+  int       n_hydrogens; /* hydrogens on the first atom (implicit or in brackets) */
+  gboolean  from_smiles; /* FALSE: no usable fragment; first_atom from the group, nothing else known */
 } CwFragmentInfo;
 
 /* Reads group->smiles (written from the attachment atom, e.g. "C(=O)OC", "[Si](C)(C)C", "c1ccccc1").

@@ -24,10 +24,9 @@ element_lookup (const char *symbol, CwElement *el)
 
 /* {"value": x, "source": "..."} under parent[field]; the value must lie in [lo, hi]. */
 static gboolean
-read_sourced (const cJSON *parent, const char *field, double lo, double hi, CwSourcedValue *out,
-              const char *name, GError **error)
+read_sourced (const cJSON *parent, const char *field, double lo, double hi, CwSourcedValue *out, const char *name, GError **error)
 {
-  const cJSON *obj = cJSON_GetObjectItemCaseSensitive (parent, field);
+  const cJSON     *obj = cJSON_GetObjectItemCaseSensitive (parent, field);
   g_autofree char *where = g_strdup_printf ("%s: “%s”", name, field);
 
   if (!cJSON_IsObject (obj))
@@ -63,7 +62,7 @@ static gboolean
 read_ring (CwGeometryData *gd, const cJSON *root, const char *name, GError **error)
 {
   const cJSON *ring = get_object (root, "ring", name, error);
-  double theta, tau;
+  double       theta, tau;
 
   if (ring == NULL ||
       !read_sourced (ring, "cc_bond", 1.3, 1.7, &gd->cc_bond, name, error) ||
@@ -80,19 +79,18 @@ read_ring (CwGeometryData *gd, const cJSON *root, const char *name, GError **err
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
                    _("%s: “ring_torsion” %.1f° disagrees with the %.1f° a chair with “ccc_angle” %.1f° has"),
-                   name, gd->ring_torsion.value, tau, gd->ccc_angle.value);
+                      name, gd->ring_torsion.value, tau, gd->ccc_angle.value);
       return FALSE;
     }
   return TRUE;
 }
 
 static gboolean
-read_element_list (const cJSON *root, const char *field, const char *value_field, double lo, double hi,
-                   gboolean *has, CwSourcedValue *values, const char *name, GError **error)
+read_element_list (const cJSON *root, const char *field, const char *value_field, double lo, double hi, gboolean *has, CwSourcedValue *values, const char *name, GError **error)
 {
   const cJSON *list = cJSON_GetObjectItemCaseSensitive (root, field);
   const cJSON *item;
-  int i = 0;
+  int          i = 0;
 
   if (!cJSON_IsArray (list))
     {
@@ -101,37 +99,37 @@ read_element_list (const cJSON *root, const char *field, const char *value_field
       return FALSE;
     }
   cJSON_ArrayForEach (item, list)
-    {
-      g_autofree char *where = g_strdup_printf ("%s: %s entry %d", name, field, ++i);
-      const char *symbol = NULL;
-      CwElement el;
-      double v = 0;
+  {
+    g_autofree char *where = g_strdup_printf ("%s: %s entry %d", name, field, ++i);
+    const char      *symbol = NULL;
+    CwElement        el;
+    double           v = 0;
 
-      if (!cJSON_IsObject (item) ||
-          !cw_json_get_string (item, "element", TRUE, &symbol, where, error) ||
-          !cw_json_get_number (item, value_field, TRUE, &v, where, error))
-        {
-          if (error && *error == NULL)
-            g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID, _("%s: not an object"), where);
-          return FALSE;
-        }
-      if (!element_lookup (symbol, &el))
-        {
-          g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                       _("%s: unknown element “%s”"), where, symbol);
-          return FALSE;
-        }
-      if ((v < lo || v > hi) && !(v == 0 && (el == CW_EL_H || el == CW_EL_D)))
-        {
-          g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                       _("%s: %s %g is outside %g to %g"), where, value_field, v, lo, hi);
-          return FALSE;
-        }
-      if (!cw_json_get_string (item, "source", TRUE, &values[el].source, where, error))
+    if (!cJSON_IsObject (item) ||
+        !cw_json_get_string (item, "element", TRUE, &symbol, where, error) ||
+        !cw_json_get_number (item, value_field, TRUE, &v, where, error))
+      {
+        if (error && *error == NULL)
+          g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID, _("%s: not an object"), where);
         return FALSE;
-      values[el].value = v;
-      has[el] = TRUE;
-    }
+      }
+    if (!element_lookup (symbol, &el))
+      {
+        g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                     _("%s: unknown element “%s”"), where, symbol);
+        return FALSE;
+      }
+    if ((v < lo || v > hi) && !(v == 0 && (el == CW_EL_H || el == CW_EL_D)))
+      {
+        g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                     _("%s: %s %g is outside %g to %g"), where, value_field, v, lo, hi);
+        return FALSE;
+      }
+    if (!cw_json_get_string (item, "source", TRUE, &values[el].source, where, error))
+      return FALSE;
+    values[el].value = v;
+    has[el] = TRUE;
+  }
   return TRUE;
 }
 
@@ -139,7 +137,7 @@ static gboolean
 read_set (CwKarplusSet *set, const cJSON *item, const char *where, GError **error)
 {
   const cJSON *p = cJSON_GetObjectItemCaseSensitive (item, "p");
-  double n = 0;
+  double       n = 0;
 
   if (!cw_json_get_string (item, "id", TRUE, &set->id, where, error) ||
       !cw_json_get_string (item, "label", TRUE, &set->label, where, error) ||
@@ -183,7 +181,7 @@ read_karplus (CwGeometryData *gd, const cJSON *root, const char *name, GError **
 {
   const cJSON *k = get_object (root, "karplus", name, error);
   const cJSON *sets, *item;
-  const char *def = NULL;
+  const char  *def = NULL;
 
   if (k == NULL)
     return FALSE;
@@ -196,16 +194,16 @@ read_karplus (CwGeometryData *gd, const cJSON *root, const char *name, GError **
       return FALSE;
     }
   cJSON_ArrayForEach (item, sets)
-    {
-      g_autofree char *where = g_strdup_printf ("%s: karplus set %d", name, gd->n_sets + 1);
-      if (!cJSON_IsObject (item) || !read_set (&gd->sets[gd->n_sets], item, where, error))
-        {
-          if (error && *error == NULL)
-            g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID, _("%s: not an object"), where);
-          return FALSE;
-        }
-      gd->n_sets++;
-    }
+  {
+    g_autofree char *where = g_strdup_printf ("%s: karplus set %d", name, gd->n_sets + 1);
+    if (!cJSON_IsObject (item) || !read_set (&gd->sets[gd->n_sets], item, where, error))
+      {
+        if (error && *error == NULL)
+          g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID, _("%s: not an object"), where);
+        return FALSE;
+      }
+    gd->n_sets++;
+  }
   if (!cw_json_get_string (k, "default", TRUE, &def, name, error) ||
       !cw_json_get_string (k, "xi_convention", TRUE, &gd->xi_convention, name, error))
     return FALSE;
@@ -248,16 +246,16 @@ read_misc (CwGeometryData *gd, const cJSON *root, const char *name, GError **err
       return FALSE;
     }
   cJSON_ArrayForEach (item, values)
-    {
-      CwElement el;
-      if (!cJSON_IsString (item) || !element_lookup (item->valuestring, &el))
-        {
-          g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                       _("%s: “neighbouring_elements” holds something that is not a known element"), name);
-          return FALSE;
-        }
-      gd->neighbouring[el] = TRUE;
-    }
+  {
+    CwElement el;
+    if (!cJSON_IsString (item) || !element_lookup (item->valuestring, &el))
+      {
+        g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                     _("%s: “neighbouring_elements” holds something that is not a known element"), name);
+        return FALSE;
+      }
+    gd->neighbouring[el] = TRUE;
+  }
   return TRUE;
 }
 
@@ -296,7 +294,7 @@ CwGeometryData *
 cw_geometry_data_new_from_file (const char *path, GError **error)
 {
   g_autofree char *contents = NULL;
-  gsize len = 0;
+  gsize            len = 0;
 
   g_return_val_if_fail (path != NULL, NULL);
   if (!g_file_get_contents (path, &contents, &len, error))

@@ -12,7 +12,7 @@ G_BEGIN_DECLS
 /* A number from data/geometry.json with its provenance (borrowed from the table). */
 typedef struct
 {
-  double value;
+  double      value;
   const char *source;
 } CwSourcedValue;
 
@@ -21,10 +21,10 @@ typedef struct
  * Δχi = Δχ(α) − P7 Σ Δχ(β). p[0..6] are P1..P7 (Hz, P6 in degrees). */
 typedef struct
 {
-  const char *id;      /* "general", "two", "three", "four" */
+  const char *id; /* "general", "two", "three", "four" */
   const char *label;
-  int substituents;    /* number of non-H substituents on the H–C–C–H fragment it was fitted to; 0 = any */
-  double p[CW_KARPLUS_N_PARAMS];
+  int         substituents; /* number of non-H substituents on the H–C–C–H fragment it was fitted to; 0 = any */
+  double      p[CW_KARPLUS_N_PARAMS];
   const char *source;
 } CwKarplusSet;
 
@@ -32,28 +32,28 @@ typedef struct
  * all strings are owned by the table. */
 typedef struct
 {
-  CwSourcedValue cc_bond;        /* ring C–C, Å */
-  CwSourcedValue ch_axial;       /* ring C–H, Å */
+  CwSourcedValue cc_bond;  /* ring C–C, Å */
+  CwSourcedValue ch_axial; /* ring C–H, Å */
   CwSourcedValue ch_equatorial;
-  CwSourcedValue ccc_angle;      /* degrees */
-  CwSourcedValue ring_torsion;   /* degrees; checked against the D3d value from ccc_angle */
-  CwSourcedValue exocyclic_angle;/* angle between the two exocyclic bonds of a ring carbon */
-  gboolean has_bond[CW_N_ELEMENTS];
-  CwSourcedValue bond[CW_N_ELEMENTS];           /* ring C – first atom of a substituent, Å */
-  gboolean has_electronegativity[CW_N_ELEMENTS];
+  CwSourcedValue ccc_angle;       /* degrees */
+  CwSourcedValue ring_torsion;    /* degrees; checked against the D3d value from ccc_angle */
+  CwSourcedValue exocyclic_angle; /* angle between the two exocyclic bonds of a ring carbon */
+  gboolean       has_bond[CW_N_ELEMENTS];
+  CwSourcedValue bond[CW_N_ELEMENTS]; /* ring C – first atom of a substituent, Å */
+  gboolean       has_electronegativity[CW_N_ELEMENTS];
   CwSourcedValue electronegativity[CW_N_ELEMENTS]; /* Huggins scale where available */
-  CwKarplusSet sets[CW_KARPLUS_MAX_SETS];
-  int n_sets;
-  int default_set;
-  const char *xi_convention;
-  CwSourcedValue geminal;        /* 2J of a ring CH2, Hz */
-  CwSourcedValue anti_periplanar_min;  /* degrees */
-  CwSourcedValue multiplet_tolerance;  /* Hz */
-  CwSourcedValue resolved_min;         /* Hz */
-  CwSourcedValue inverse_tolerance;    /* Hz */
-  CwSourcedValue inverse_min_spread;   /* Hz */
-  gboolean neighbouring[CW_N_ELEMENTS]; /* first atoms that can act as neighbouring groups */
-  const char *neighbouring_source;
+  CwKarplusSet   sets[CW_KARPLUS_MAX_SETS];
+  int            n_sets;
+  int            default_set;
+  const char    *xi_convention;
+  CwSourcedValue geminal;                     /* 2J of a ring CH2, Hz */
+  CwSourcedValue anti_periplanar_min;         /* degrees */
+  CwSourcedValue multiplet_tolerance;         /* Hz */
+  CwSourcedValue resolved_min;                /* Hz */
+  CwSourcedValue inverse_tolerance;           /* Hz */
+  CwSourcedValue inverse_min_spread;          /* Hz */
+  gboolean       neighbouring[CW_N_ELEMENTS]; /* first atoms that can act as neighbouring groups */
+  const char    *neighbouring_source;
   /* private */
   void *json;
 } CwGeometryData;

@@ -68,7 +68,7 @@ place_ring (const CwGeometryData *gd, int chair, CwChairGeometry *out)
   for (int k = 0; k < CW_RING_SIZE; k++)
     {
       CwAtom3D *a = &out->atoms[out->n_atoms];
-      int position = k + 1;
+      int       position = k + 1;
 
       a->kind = CW_ATOM_RING;
       a->element = CW_EL_C;
@@ -91,14 +91,13 @@ bond_length (const CwGeometryData *gd, CwElement el, gboolean axial)
 }
 
 static gboolean
-place_slot (const CwGeometryData *gd, const CwMolecule *mol, CwChairGeometry *out, int k,
-            CwFace face, const double dir[3], GError **error)
+place_slot (const CwGeometryData *gd, const CwMolecule *mol, CwChairGeometry *out, int k, CwFace face, const double dir[3], GError **error)
 {
-  int position = k + 1;
+  int                  position = k + 1;
   const CwSubstituent *s = cw_molecule_get (mol, position, face);
-  CwAtom3D *a = &out->atoms[out->n_atoms];
-  const double *c = out->atoms[out->ring[k]].xyz;
-  double len;
+  CwAtom3D            *a = &out->atoms[out->n_atoms];
+  const double        *c = out->atoms[out->ring[k]].xyz;
+  double               len;
 
   a->position = position;
   a->face = face;
@@ -113,7 +112,7 @@ place_slot (const CwGeometryData *gd, const CwMolecule *mol, CwChairGeometry *ou
         {
           g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_UNSUPPORTED,
                        _("No C–%s bond length in the geometry table for group “%s” on carbon %d"),
-                       cw_element_symbol (a->element), s->group->id, position);
+                          cw_element_symbol (a->element), s->group->id, position);
           return FALSE;
         }
     }
@@ -131,10 +130,10 @@ place_slot (const CwGeometryData *gd, const CwMolecule *mol, CwChairGeometry *ou
 
 gboolean
 cw_chair_geometry_build (const CwGeometryData *gd,
-                         const CwMolecule *mol,
-                         int chair,
-                         CwChairGeometry *out,
-                         GError **error)
+                         const CwMolecule     *mol,
+                         int                   chair,
+                         CwChairGeometry      *out,
+                         GError              **error)
 {
   double half = 0.5 * gd->exocyclic_angle.value * DEG;
 
@@ -153,7 +152,7 @@ cw_chair_geometry_build (const CwGeometryData *gd,
       const double *c = out->atoms[out->ring[k]].xyz;
       const double *prev = out->atoms[out->ring[(k + 5) % 6]].xyz;
       const double *next = out->atoms[out->ring[(k + 1) % 6]].xyz;
-      double u[3], v[3], b[3], n[3], up[3], down[3];
+      double        u[3], v[3], b[3], n[3], up[3], down[3];
 
       v_sub (prev, c, u);
       v_sub (next, c, v);
@@ -162,7 +161,7 @@ cw_chair_geometry_build (const CwGeometryData *gd,
       for (int i = 0; i < 3; i++)
         b[i] = -(u[i] + v[i]); /* outward bisector of the C–C–C angle */
       v_normalize (b);
-      v_cross (u, v, n);       /* normal to the C–C–C plane */
+      v_cross (u, v, n); /* normal to the C–C–C plane */
       v_normalize (n);
       if (n[2] < 0)
         for (int i = 0; i < 3; i++)
@@ -232,7 +231,7 @@ cw_chair_geometry_angle (const CwChairGeometry *g, int a, int b, int c)
 char *
 cw_chair_geometry_to_xyz (const CwChairGeometry *g, const char *comment)
 {
-  GString *s = g_string_new (NULL);
+  GString         *s = g_string_new (NULL);
   g_autofree char *line = g_strdup (comment ? comment : "");
 
   g_return_val_if_fail (g != NULL, NULL);
@@ -243,7 +242,7 @@ cw_chair_geometry_to_xyz (const CwChairGeometry *g, const char *comment)
       const CwAtom3D *a = &g->atoms[i];
       /* XYZ knows elements only: deuterium is written as H. */
       const char *el = (a->element == CW_EL_D) ? "H" : cw_element_symbol (a->element);
-      char x[G_ASCII_DTOSTR_BUF_SIZE], y[G_ASCII_DTOSTR_BUF_SIZE], z[G_ASCII_DTOSTR_BUF_SIZE];
+      char        x[G_ASCII_DTOSTR_BUF_SIZE], y[G_ASCII_DTOSTR_BUF_SIZE], z[G_ASCII_DTOSTR_BUF_SIZE];
 
       /* Locale-independent decimal points. */
       g_ascii_formatd (x, sizeof x, "%.5f", a->xyz[0]);

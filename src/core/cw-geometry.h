@@ -20,29 +20,29 @@ G_BEGIN_DECLS
 
 typedef enum
 {
-  CW_ATOM_RING,        /* ring carbon */
-  CW_ATOM_HYDROGEN,    /* ring hydrogen */
-  CW_ATOM_SUBSTITUENT  /* first atom of a substituent */
+  CW_ATOM_RING,       /* ring carbon */
+  CW_ATOM_HYDROGEN,   /* ring hydrogen */
+  CW_ATOM_SUBSTITUENT /* first atom of a substituent */
 } CwAtomKind;
 
 typedef struct
 {
   CwAtomKind kind;
-  CwElement element;
-  double xyz[3];   /* Å */
-  int position;    /* ring carbon 1..6 it is (or is bonded to) */
-  CwFace face;     /* for H and substituents */
-  gboolean axial;  /* for H and substituents, in this chair */
-  int sub;         /* index into the molecule's subs, or -1 */
+  CwElement  element;
+  double     xyz[3];   /* Å */
+  int        position; /* ring carbon 1..6 it is (or is bonded to) */
+  CwFace     face;     /* for H and substituents */
+  gboolean   axial;    /* for H and substituents, in this chair */
+  int        sub;      /* index into the molecule's subs, or -1 */
 } CwAtom3D;
 
 typedef struct
 {
-  int chair;                        /* 0 = chair 1, 1 = chair 2 */
+  int      chair; /* 0 = chair 1, 1 = chair 2 */
   CwAtom3D atoms[CW_CHAIR_MAX_ATOMS];
-  int n_atoms;                      /* always CW_CHAIR_MAX_ATOMS once built */
-  int ring[CW_RING_SIZE];           /* atom index of carbon k + 1 */
-  int slot[CW_RING_SIZE][2];        /* atom index on carbon k + 1, [CW_FACE_UP / CW_FACE_DOWN] */
+  int      n_atoms;               /* always CW_CHAIR_MAX_ATOMS once built */
+  int      ring[CW_RING_SIZE];    /* atom index of carbon k + 1 */
+  int      slot[CW_RING_SIZE][2]; /* atom index on carbon k + 1, [CW_FACE_UP / CW_FACE_DOWN] */
 } CwChairGeometry;
 
 /* clang-format off */

@@ -32,7 +32,7 @@ add_warning (CwReactivity *r, CwReactWarningCode code, int a, int b, double valu
 {
   if (r->n_warnings >= CW_MAX_REACT_WARNINGS)
     return;
-  r->warnings[r->n_warnings++] = (CwReactWarning) { code, a, b, value };
+  r->warnings[r->n_warnings++] = (CwReactWarning){ code, a, b, value };
 }
 
 /* Non-H groups on a ring carbon, not counting the slot `except` (-1 for none). */
@@ -56,20 +56,20 @@ find_anti_hydrogens (const CwMolecule *mol, CwReactivity *r, CwLeavingGroup *lg,
   for (int ch = 0; ch < 2; ch++)
     {
       const CwChairGeometry *g = &r->geometry[ch];
-      int x = g->slot[s->position - 1][s->face];
+      int                    x = g->slot[s->position - 1][s->face];
 
       for (int step = -1; step <= 1; step += 2)
         {
           int b = ring_neighbour (s->position, step);
           for (int f = 0; f < 2; f++)
             {
-              int h = g->slot[b - 1][f];
+              int    h = g->slot[b - 1][f];
               double t;
               if (g->atoms[h].kind != CW_ATOM_HYDROGEN || lg->n_anti[ch] >= 2)
                 continue;
               t = cw_chair_geometry_torsion (g, x, g->ring[s->position - 1], g->ring[b - 1], h);
               if (fabs (t) >= r->anti_min)
-                lg->anti[ch][lg->n_anti[ch]++] = (CwAntiHydrogen) { b, (CwFace) f, h, t };
+                lg->anti[ch][lg->n_anti[ch]++] = (CwAntiHydrogen){ b, (CwFace) f, h, t };
             }
         }
     }
@@ -81,7 +81,7 @@ add_ring_alkenes (const CwMolecule *mol, CwReactivity *r, CwLeavingGroup *lg, co
 {
   for (int step = -1; step <= 1; step += 2)
     {
-      int b = ring_neighbour (s->position, step);
+      int       b = ring_neighbour (s->position, step);
       CwAlkene *al = &lg->alkenes[lg->n_alkenes];
 
       memset (al, 0, sizeof *al);
@@ -107,8 +107,8 @@ static void
 add_exo_alkene (const CwMolecule *mol, CwReactivity *r, CwLeavingGroup *lg, const CwSubstituent *s)
 {
   const CwSubstituent *gem = cw_molecule_get (mol, s->position, other_face (s->face));
-  CwFragmentInfo info;
-  CwAlkene *al;
+  CwFragmentInfo       info;
+  CwAlkene            *al;
 
   if (gem == NULL || gem->group->first_atom != CW_EL_C)
     return;
@@ -131,7 +131,7 @@ static void
 analyse_leaving (const CwMolecule *mol, CwReactivity *r, const CwSubstituent *s)
 {
   CwLeavingGroup *lg = &r->groups[r->n_groups++];
-  int best = 0;
+  int             best = 0;
 
   memset (lg, 0, sizeof *lg);
   lg->sub = (int) (s - mol->subs);
@@ -185,9 +185,9 @@ analyse_pairs (const CwGeometryData *gd, const CwMolecule *mol, CwReactivity *r)
     for (int k = i + 1; k < mol->n_subs; k++)
       {
         const CwSubstituent *a = &mol->subs[i], *b = &mol->subs[k];
-        CwAntiPair *p;
-        gboolean swap;
-        CwAntiPairRole role;
+        CwAntiPair          *p;
+        gboolean             swap;
+        CwAntiPairRole       role;
 
         if (ring_neighbour (a->position, 1) != b->position && ring_neighbour (a->position, -1) != b->position)
           continue;
@@ -217,11 +217,11 @@ analyse_pairs (const CwGeometryData *gd, const CwMolecule *mol, CwReactivity *r)
 
 gboolean
 cw_reactivity_compute (const CwGeometryData *gd,
-                       const CwMolecule *mol,
-                       const double pop[2],
-                       double temperature,
-                       CwReactivity *out,
-                       GError **error)
+                       const CwMolecule     *mol,
+                       const double          pop[2],
+                       double                temperature,
+                       CwReactivity         *out,
+                       GError              **error)
 {
   g_return_val_if_fail (gd != NULL && mol != NULL && pop != NULL && out != NULL, FALSE);
   if (!isfinite (pop[0]) || !isfinite (pop[1]) || pop[0] < 0 || pop[1] < 0 ||
@@ -260,7 +260,7 @@ char *
 cw_alkene_dup_label (const CwAlkene *alkene, const CwMolecule *mol)
 {
   static const char *degree[] = { "", N_("monosubstituted"), N_("disubstituted"), N_("trisubstituted"), N_("tetrasubstituted") };
-  const char *d = (alkene->substitution >= 1 && alkene->substitution <= 4) ? _(degree[alkene->substitution]) : "";
+  const char        *d = (alkene->substitution >= 1 && alkene->substitution <= 4) ? _(degree[alkene->substitution]) : "";
 
   if (alkene->position_b == 0)
     {
@@ -276,13 +276,19 @@ cw_react_warning_code_to_string (CwReactWarningCode code)
 {
   switch (code)
     {
-    case CW_REACT_NO_LEAVING_GROUP: return "no-leaving-group";
-    case CW_REACT_NO_ANTI_H: return "no-anti-h";
-    case CW_REACT_MINOR_CHAIR: return "minor-chair";
-    case CW_REACT_CIS_NEIGHBOUR: return "cis-neighbour";
-    case CW_REACT_GEMINAL_LEAVING: return "tertiary-centre";
+    case CW_REACT_NO_LEAVING_GROUP:
+      return "no-leaving-group";
+    case CW_REACT_NO_ANTI_H:
+      return "no-anti-h";
+    case CW_REACT_MINOR_CHAIR:
+      return "minor-chair";
+    case CW_REACT_CIS_NEIGHBOUR:
+      return "cis-neighbour";
+    case CW_REACT_GEMINAL_LEAVING:
+      return "tertiary-centre";
     case CW_N_REACT_WARNINGS:
-    default: return "unknown";
+    default:
+      return "unknown";
     }
 }
 
@@ -291,10 +297,14 @@ cw_anti_pair_role_to_string (CwAntiPairRole role)
 {
   switch (role)
     {
-    case CW_ANTI_PARTICIPATION: return "participation";
-    case CW_ANTI_ELIMINATION_XY: return "anti-elimination";
-    case CW_ANTI_PAIR: return "anti-pair";
-    default: return "unknown";
+    case CW_ANTI_PARTICIPATION:
+      return "participation";
+    case CW_ANTI_ELIMINATION_XY:
+      return "anti-elimination";
+    case CW_ANTI_PAIR:
+      return "anti-pair";
+    default:
+      return "unknown";
     }
 }
 
@@ -311,19 +321,19 @@ cw_react_warning_dup_message (const CwReactWarning *w, const CwMolecule *mol)
     case CW_REACT_NO_ANTI_H:
       return g_strdup_printf (_("%s has no anti-periplanar β-hydrogen in either chair: no E2 is possible "
                                 "from it by the anti pathway; expect slow reaction, substitution or a syn/E1 route."),
-                              a);
+                                 a);
     case CW_REACT_MINOR_CHAIR:
       return g_strdup_printf (_("%s is anti-periplanar to a β-hydrogen only in the minor chair (%.2g%% of "
                                 "molecules): E2 goes through that chair and is slow."),
-                              a, 100.0 * w->value);
+                                 a, 100.0 * w->value);
     case CW_REACT_CIS_NEIGHBOUR:
       return g_strdup_printf (_("%s and %s are cis: they can never be anti-periplanar, so no "
                                 "neighbouring-group participation by the anti pathway."),
-                              a, b);
+                                 a, b);
     case CW_REACT_GEMINAL_LEAVING:
       return g_strdup_printf (_("%s is on a carbon that carries another group: a tertiary centre, where "
                                 "E1 and SN1 can compete with E2."),
-                              a);
+                                 a);
     case CW_N_REACT_WARNINGS:
     default:
       return g_strdup ("");

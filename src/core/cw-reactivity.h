@@ -20,53 +20,53 @@ G_BEGIN_DECLS
 
 typedef struct
 {
-  int position;     /* β ring carbon */
-  CwFace face;      /* face of the β-hydrogen */
-  int atom;         /* its atom index in the chair geometry */
-  double torsion;   /* LG–Cα–Cβ–H, degrees */
+  int    position; /* β ring carbon */
+  CwFace face;     /* face of the β-hydrogen */
+  int    atom;     /* its atom index in the chair geometry */
+  double torsion;  /* LG–Cα–Cβ–H, degrees */
 } CwAntiHydrogen;
 
 typedef struct
 {
-  int position_a;        /* Cα (the leaving group's carbon) */
-  int position_b;        /* Cβ ring carbon; 0 for an exocyclic alkene */
-  int exo_sub;           /* for an exocyclic alkene: the geminal substituent that loses H; else -1 */
-  int substitution;      /* non-H substituents on the two alkene carbons: 2 di, 3 tri, 4 tetra */
-  gboolean chair_ok[2];  /* an anti-periplanar β-H for this alkene exists in chair 1 / 2 */
-  double fraction;       /* population fraction in chairs that can give it */
+  int      position_a;       /* Cα (the leaving group's carbon) */
+  int      position_b;       /* Cβ ring carbon; 0 for an exocyclic alkene */
+  int      exo_sub;          /* for an exocyclic alkene: the geminal substituent that loses H; else -1 */
+  int      substitution;     /* non-H substituents on the two alkene carbons: 2 di, 3 tri, 4 tetra */
+  gboolean chair_ok[2];      /* an anti-periplanar β-H for this alkene exists in chair 1 / 2 */
+  double   fraction;         /* population fraction in chairs that can give it */
   gboolean most_substituted; /* the most substituted of the possible alkenes (Zaitsev) */
 } CwAlkene;
 
 typedef struct
 {
-  int sub;                          /* molecule substituent index */
-  int position;
-  gboolean axial[2];
-  CwAntiHydrogen anti[2][2];        /* per chair, up to two anti-periplanar β-H (ring) */
-  int n_anti[2];
-  gboolean exo_anti;                /* a geminal alkyl group's H can always turn anti */
-  gboolean reactive[2];             /* chair has the leaving group anti to a β-H */
-  double reactive_fraction;         /* Σ pop over reactive chairs */
-  CwAlkene alkenes[CW_MAX_ALKENES]; /* the possible E2 alkenes */
-  int n_alkenes;
-  gboolean no_anti_h;               /* neither chair has an anti-periplanar β-H */
+  int            sub; /* molecule substituent index */
+  int            position;
+  gboolean       axial[2];
+  CwAntiHydrogen anti[2][2]; /* per chair, up to two anti-periplanar β-H (ring) */
+  int            n_anti[2];
+  gboolean       exo_anti;                /* a geminal alkyl group's H can always turn anti */
+  gboolean       reactive[2];             /* chair has the leaving group anti to a β-H */
+  double         reactive_fraction;       /* Σ pop over reactive chairs */
+  CwAlkene       alkenes[CW_MAX_ALKENES]; /* the possible E2 alkenes */
+  int            n_alkenes;
+  gboolean       no_anti_h; /* neither chair has an anti-periplanar β-H */
 } CwLeavingGroup;
 
 typedef enum
 {
-  CW_ANTI_PARTICIPATION,   /* a leaving group with a lone-pair neighbour trans on the next carbon */
-  CW_ANTI_ELIMINATION_XY,  /* two leaving groups trans-vicinal: anti elimination of X–Y */
-  CW_ANTI_PAIR             /* any other trans-vicinal heteroatom pair that can be anti-periplanar */
+  CW_ANTI_PARTICIPATION,  /* a leaving group with a lone-pair neighbour trans on the next carbon */
+  CW_ANTI_ELIMINATION_XY, /* two leaving groups trans-vicinal: anti elimination of X–Y */
+  CW_ANTI_PAIR            /* any other trans-vicinal heteroatom pair that can be anti-periplanar */
 } CwAntiPairRole;
 
 typedef struct
 {
-  int sub_a;              /* the leaving group (for participation), or the lower position */
-  int sub_b;
+  int            sub_a; /* the leaving group (for participation), or the lower position */
+  int            sub_b;
   CwAntiPairRole role;
-  gboolean anti[2];       /* diaxial (anti-periplanar) in chair 1 / chair 2 */
-  double torsion[2];      /* X–C–C–Y, degrees */
-  double fraction;        /* population fraction with the pair anti-periplanar */
+  gboolean       anti[2];    /* diaxial (anti-periplanar) in chair 1 / chair 2 */
+  double         torsion[2]; /* X–C–C–Y, degrees */
+  double         fraction;   /* population fraction with the pair anti-periplanar */
 } CwAntiPair;
 
 typedef enum
@@ -82,23 +82,23 @@ typedef enum
 typedef struct
 {
   CwReactWarningCode code;
-  int sub_a;
-  int sub_b;     /* -1 when none */
-  double value;  /* e.g. the reactive fraction */
+  int                sub_a;
+  int                sub_b; /* -1 when none */
+  double             value; /* e.g. the reactive fraction */
 } CwReactWarning;
 
 typedef struct
 {
-  double temperature;
-  double pop[2];
-  double anti_min;          /* degrees, from the table */
+  double          temperature;
+  double          pop[2];
+  double          anti_min; /* degrees, from the table */
   CwChairGeometry geometry[2];
-  CwLeavingGroup groups[CW_MAX_LEAVING];
-  int n_groups;
-  CwAntiPair pairs[CW_MAX_ANTI_PAIRS];
-  int n_pairs;
-  CwReactWarning warnings[CW_MAX_REACT_WARNINGS];
-  int n_warnings;
+  CwLeavingGroup  groups[CW_MAX_LEAVING];
+  int             n_groups;
+  CwAntiPair      pairs[CW_MAX_ANTI_PAIRS];
+  int             n_pairs;
+  CwReactWarning  warnings[CW_MAX_REACT_WARNINGS];
+  int             n_warnings;
 } CwReactivity;
 
 /* clang-format off */

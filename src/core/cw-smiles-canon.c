@@ -11,8 +11,8 @@
 
 #define EMPTY G_GINT64_CONSTANT (1) << 40
 
-static gint64
-group_rank (const CwGroup *g)
+gint64
+cw_sm_group_rank (const CwGroup *g)
 {
   if (g == NULL)
     return EMPTY;
@@ -33,6 +33,18 @@ swaps_faces (const CwRingTransform *t)
   return (t->dir < 0) != (t->flip != FALSE);
 }
 
+int
+cw_sm_transform_source (const CwRingTransform *t, int p)
+{
+  return source_position (t, p);
+}
+
+gboolean
+cw_sm_transform_swaps (const CwRingTransform *t)
+{
+  return swaps_faces (t);
+}
+
 void
 cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
 {
@@ -51,8 +63,8 @@ cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[
       const CwGroup *up = slot[q][swap ? 1 : 0], *down = slot[q][swap ? 0 : 1];
       int count = (up != NULL) + (down != NULL);
       occupancy = occupancy * 3 + (2 - count);
-      key[2 * p - 1] = group_rank (up);
-      key[2 * p] = group_rank (down);
+      key[2 * p - 1] = cw_sm_group_rank (up);
+      key[2 * p] = cw_sm_group_rank (down);
     }
   key[0] = occupancy;
 }
@@ -124,7 +136,7 @@ cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 
   for (int p = 0; p <= CW_RING_SIZE; p++)
     {
       const CwGroup *a = slot[p][0], *b = slot[p][1];
-      relevant[p] = p > 0 && (a != NULL || b != NULL) && group_rank (a) != group_rank (b);
+      relevant[p] = p > 0 && (a != NULL || b != NULL) && cw_sm_group_rank (a) != cw_sm_group_rank (b);
       n += relevant[p];
     }
   return n;

@@ -101,6 +101,11 @@ void     cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, 
 /* Writes a key of the molecule under t into key[CW_SM_KEY_LEN]; equal keys mean equal molecules. */
 #define CW_SM_KEY_LEN 13
 void     cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN]);
+/* Order of groups in canonical keys: table order, custom groups after the table. */
+gint64   cw_sm_group_rank (const CwGroup *group);
+/* The source position of result position p (1..6), and whether faces are swapped. */
+int      cw_sm_transform_source (const CwRingTransform *t, int p);
+gboolean cw_sm_transform_swaps (const CwRingTransform *t);
 /* Stereo-relevant carbons: one group and an H, or two different groups. */
 int      cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1]);
 /* The chair species of a relative configuration, counted as cw-isomers.h explains. */

@@ -28,7 +28,10 @@ void   cw_chair3d_build (CwChair3D *chair, int which);
  * top towards the viewer by `tilt` (radians), drop the depth. */
 void   cw_chair_project (const CwVec3 *v, double azimuth, double tilt, double *px, double *py);
 
-#define CW_CHAIR_AZIMUTH (-0.21) /* radians, spreads the six carbons across the page */
-#define CW_CHAIR_TILT    (0.30)  /* radians, the ring seen slightly from above */
+#define CW_CHAIR_TILT    (12.0 * G_PI / 180.0)  /* radians, the ring seen slightly from above */
+/* The view of each chair, radians about the axis: chair 2 is chair 1 turned by 60° (the
+ * ring-inverted chair has the same shape), so both are seen from the same side of the shape and
+ * both read as the familiar drawing; the six carbons are spread across the page. */
+double cw_chair_azimuth (int which);
 
 G_END_DECLS

@@ -36,14 +36,17 @@ typedef struct
   CwPoint atom[6];
   SubPlace sub[CW_MAX_SUBS];
   int which;
+  double azimuth;
+  const int *order; /* substituents in placing order */
+  int failures;     /* labels that found no clear spot */
 } ChairLayout;
 
 static CwPoint
-project_dir (const CwVec3 *v)
+project_dir (const ChairLayout *cl, const CwVec3 *v)
 {
   double x, y, n;
 
-  cw_chair_project (v, CW_CHAIR_AZIMUTH, CW_CHAIR_TILT, &x, &y);
+  cw_chair_project (v, cl->azimuth, CW_CHAIR_TILT, &x, &y);
   n = hypot (x, y);
   return (CwPoint) { x / n, y / n };
 }
@@ -54,11 +57,12 @@ draw_ring (ChairLayout *cl, double cx, double cy, gboolean major)
   double minx = G_MAXDOUBLE, maxx = -G_MAXDOUBLE, miny = G_MAXDOUBLE, maxy = -G_MAXDOUBLE;
 
   cw_chair3d_build (&cl->chair3d, cl->which);
+  cl->azimuth = cw_chair_azimuth (cl->which);
   for (int k = 0; k < 6; k++)
     {
       double x, y;
 
-      cw_chair_project (&cl->chair3d.atom[k], CW_CHAIR_AZIMUTH, CW_CHAIR_TILT, &x, &y);
+      cw_chair_project (&cl->chair3d.atom[k], cl->azimuth, CW_CHAIR_TILT, &x, &y);
       cl->atom[k] = (CwPoint) { x * cl->bond, y * cl->bond };
       minx = MIN (minx, cl->atom[k].x);
       maxx = MAX (maxx, cl->atom[k].x);
@@ -87,22 +91,13 @@ place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double siz
              CwRole role, int sub, gboolean axial, SubPlace *out)
 {
   CwPoint a = cl->atom[k];
-  CwLabelPlace place = { 0 }, first = { 0 };
+  CwLabelPlace place = { 0 };
   CwLabelText lt = { 0 };
-  gboolean found = FALSE;
   gboolean h = role == CW_ROLE_HYDROGEN;
   CwPrim *p;
 
-  for (int t = 0; t < 16 && !found; t++)
-    {
-      cw_label_text_clear (&lt);
-      cw_label_place (markup, size, a.x, a.y, dir.x, dir.y, base + 4.0 * t, &place, &lt);
-      if (t == 0)
-        first = place;
-      found = !cw_placer_collides (&cl->placer, &place.box, a.x, a.y, place.ex, place.ey);
-    }
-  if (!found)
-    place = first;
+  if (cw_placer_place_label (&cl->placer, markup, size, a.x, a.y, dir.x, dir.y, base, &place, &lt) > 0)
+    cl->failures++;
   if (!h && cl->opt->highlight_sub == sub)
     {
       p = cw_scene_add (cl->scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);
@@ -114,6 +109,7 @@ place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double siz
     }
   p = cw_scene_line (cl->scene, h ? CW_ROLE_HYDROGEN : CW_ROLE_SUB_BOND, h ? CW_INK_MUTED : CW_INK_BOND,
                      a.x, a.y, place.ex, place.ey, h ? 0.8 : 1.3);
+  p->halo = TRUE;
   p->chair = cl->which;
   p->sub = sub;
   p->position = k + 1;
@@ -137,28 +133,24 @@ draw_substituents (ChairLayout *cl)
   const CwChair *ch = &cl->an->chair[cl->which];
   gboolean taken[6][2] = { { FALSE } }; /* [carbon][axial] */
 
-  /* Axial groups first: their vertical bonds are the least flexible. */
-  for (int pass = 0; pass < 2; pass++)
-    for (int i = 0; i < cl->mol->n_subs; i++)
-      {
-        const CwSubstituent *s = &cl->mol->subs[i];
-        int k = s->position - 1;
-        gboolean axial = ch->axial[i];
-        CwPoint dir;
+  for (int n = 0; n < cl->mol->n_subs; n++)
+    {
+      int i = cl->order[n];
+      const CwSubstituent *s = &cl->mol->subs[i];
+      int k = s->position - 1;
+      gboolean axial = ch->axial[i];
+      CwPoint dir = project_dir (cl, axial ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]);
 
-        if (axial != (pass == 0))
-          continue;
-        dir = project_dir (axial ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]);
-        taken[k][axial] = TRUE;
-        place_group (cl, k, dir, s->group->markup, LABEL_SIZE, 0.8 * cl->bond, CW_ROLE_SUB_LABEL, i, axial,
-                     &cl->sub[i]);
-      }
+      taken[k][axial] = TRUE;
+      place_group (cl, k, dir, s->group->markup, LABEL_SIZE, 0.8 * cl->bond, CW_ROLE_SUB_LABEL, i, axial,
+                   &cl->sub[i]);
+    }
   if (!cl->opt->show_hydrogens)
     return;
   for (int k = 0; k < 6; k++)
     for (int ax = 1; ax >= 0; ax--)
       if (!taken[k][ax])
-        place_group (cl, k, project_dir (ax ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]), "H",
+        place_group (cl, k, project_dir (cl, ax ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]), "H",
                      H_SIZE, 0.5 * cl->bond, CW_ROLE_HYDROGEN, -1, ax, NULL);
 }
 
@@ -212,14 +204,15 @@ mark_term (ChairLayout *cl, const CwTerm *term, CwPoint centre)
 }
 
 static void
-draw_chair (ChairLayout *cl, double cx, double cy, gboolean major)
+draw_chair_once (ChairLayout *cl, gboolean major)
 {
   const CwChair *ch = &cl->an->chair[cl->which];
-  CwPoint centre = { cx, cy };
+  CwPoint centre = { 0, 0 };
 
   cw_placer_init (&cl->placer);
   memset (cl->sub, 0, sizeof cl->sub);
-  draw_ring (cl, cx, cy, major);
+  cl->failures = 0;
+  draw_ring (cl, 0, 0, major);
   draw_substituents (cl);
   for (int t = 0; t < ch->n_terms; t++)
     {
@@ -231,6 +224,52 @@ draw_chair (ChairLayout *cl, double cx, double cy, gboolean major)
         mark_term (cl, term, centre);
     }
   cw_placer_clear (&cl->placer);
+}
+
+/* Lays the chair out, centred on (0, 0), into a new scene. Labels are placed one after another,
+ * each clear of those before; when some label finds no clear spot, other orders are tried (the
+ * axial groups first, then in reverse, then each group first) and the best kept. */
+static CwScene *
+draw_chair (ChairLayout *cl, gboolean major, double width, double height)
+{
+  int n = cl->mol->n_subs, order[CW_MAX_SUBS], best_failures = G_MAXINT;
+  CwScene *best = NULL;
+
+  for (int attempt = 0; attempt < n + 2 && best_failures > 0; attempt++)
+    {
+      int m = 0;
+
+      if (attempt == 0)
+        {
+          for (int pass = 0; pass < 2; pass++)
+            for (int i = 0; i < n; i++)
+              if (cl->an->chair[cl->which].axial[i] == (pass == 0))
+                order[m++] = i;
+        }
+      else if (attempt == 1)
+        for (int i = n - 1; i >= 0; i--)
+          order[m++] = i;
+      else
+        {
+          order[m++] = attempt - 2;
+          for (int i = 0; i < n; i++)
+            if (i != attempt - 2)
+              order[m++] = i;
+        }
+      cl->order = order;
+      cl->scene = cw_scene_new (width, height);
+      draw_chair_once (cl, major);
+      if (cl->failures < best_failures)
+        {
+          cw_scene_free (best);
+          best = cl->scene;
+          best_failures = cl->failures;
+        }
+      else
+        cw_scene_free (cl->scene);
+      cl->scene = NULL;
+    }
+  return best;
 }
 
 static void
@@ -295,30 +334,47 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
 {
   CwScene *scene = cw_scene_new (width, height);
   double span = MIN (width, 2 * height);
-  double cy = 0.42 * height;
-  double cx[2] = { 0.5 * width - 0.27 * span, 0.5 * width + 0.27 * span };
   double bond = 0.105 * span;
+  double mid = 0.5 * width, gap, cy;
+  CwTextMetrics km, gm;
+  double cx[2];
   gboolean decided = fabs (an->pop[0] - an->pop[1]) > 1e-6;
   g_autofree char *k = cw_render_format_k (an->K);
   g_autofree char *dg = cw_render_format_energy (an->delta_g, opt->unit);
   g_autofree char *sg = cw_render_format_energy (an->sigma, opt->unit);
   g_autofree char *kline = g_strdup_printf ("<i>K</i> = %s", k);
   g_autofree char *gline = g_strdup_printf ("Δ<i>G</i>° = %s ± %s", dg, sg);
-  CwBox bounds;
-  double cap_y;
+  CwBox bounds, cb[2];
+  CwScene *part[2];
+  double cap_y, top = G_MAXDOUBLE, bottom = -G_MAXDOUBLE;
 
+  cw_text_measure (kline, CAPTION_SIZE, FALSE, 0, 0, 0, &km);
+  cw_text_measure (gline, CAPTION_SIZE - 1, FALSE, 0, 0, 0, &gm);
+  gap = MAX (30, 0.5 * MAX (km.w, gm.w)) + 10;
+  /* Each chair is laid out on its own, then set beside the arrows with its bounds clear of them. */
   for (int c = 0; c < 2; c++)
     {
-      ChairLayout cl = { scene, mol, an, opt, bond };
+      ChairLayout cl = { NULL, mol, an, opt, bond };
 
       cl.which = c;
-      draw_chair (&cl, cx[c], cy, decided && an->major == c);
+      part[c] = draw_chair (&cl, decided && an->major == c, width, height);
+      cb[c] = cw_scene_bounds (part[c]);
+      top = MIN (top, cb[c].y);
+      bottom = MAX (bottom, cb[c].y + cb[c].h);
     }
-  equilibrium_arrows (scene, width / 2 - 24, width / 2 + 24, cy);
-  cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, kline, CAPTION_SIZE, FALSE, width / 2, cy - 12, 0.5, 1);
-  cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, gline, CAPTION_SIZE - 1, FALSE, width / 2, cy + 12, 0.5, 0);
-  bounds = cw_scene_bounds (scene);
-  cap_y = bounds.y + bounds.h + 10;
+  cy = 14 - top;
+  for (int c = 0; c < 2; c++)
+    {
+      double dx = c == 0 ? MIN (mid - gap - (cb[0].x + cb[0].w), mid - 0.27 * span)
+                         : MAX (mid + gap - cb[1].x, mid + 0.27 * span);
+      cx[c] = dx;
+      cw_scene_append (scene, part[c], dx, cy);
+      cw_scene_free (part[c]);
+    }
+  equilibrium_arrows (scene, mid - 24, mid + 24, cy);
+  cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, kline, CAPTION_SIZE, FALSE, mid, cy - 10, 0.5, 1);
+  cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, gline, CAPTION_SIZE - 1, FALSE, mid, cy + 10, 0.5, 0);
+  cap_y = cy + bottom + 10;
   for (int c = 0; c < 2; c++)
     captions (scene, an, opt, c, cx[c], cap_y, decided && an->major == c);
   bounds = cw_scene_bounds (scene);
@@ -327,18 +383,19 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
     {
       /* A faint panel behind the major chair, painted first; the caption says "major" too. */
       CwPrim panel = { 0 };
-      double half = 0.245 * span;
+      const CwBox *b = &cb[an->major];
 
       panel.kind = CW_PRIM_RECT;
       panel.ink = CW_INK_PANEL;
       panel.chair = an->major;
       panel.sub = -1;
-      panel.x0 = cx[an->major] - half;
-      panel.y0 = MIN (6, bounds.y - 4);
-      panel.x1 = 2 * half;
+      panel.x0 = MIN (cx[an->major] + b->x, cx[an->major] - 0.2 * span) - 8;
+      panel.x1 = MAX (cx[an->major] + b->x + b->w, cx[an->major] + 0.2 * span) + 8 - panel.x0;
+      panel.y0 = 4;
       panel.y1 = bounds.y + bounds.h + 4 - panel.y0;
-      panel.fill = TRUE;
       g_array_prepend_val (scene->prims, panel);
+      panel.fill = TRUE;
+      g_array_index (scene->prims, CwPrim, 0).fill = TRUE;
     }
   cw_scene_fit (scene, 6);
   return scene;

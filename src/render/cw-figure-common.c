@@ -4,6 +4,7 @@
 
 #include <math.h>
 
+#include "cw-label.h"
 #include "cw-render-private.h"
 
 static void
@@ -166,24 +167,56 @@ cw_placer_add_box (CwPlacer *pl, const CwBox *box)
   g_array_append_val (pl->labels, *box);
 }
 
-gboolean
-cw_placer_collides (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1)
+int
+cw_placer_count_hits (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1)
 {
   CwBox grown = { box->x - 1.5, box->y - 1.5, box->w + 3, box->h + 3 };
+  int hits = 0;
 
   for (guint i = 0; i < pl->labels->len; i++)
     {
       const CwBox *o = &g_array_index (pl->labels, CwBox, i);
 
-      if (cw_box_overlap (box, o, 2.0) || cw_segment_hits_box (x0, y0, x1, y1, o))
-        return TRUE;
+      hits += cw_box_overlap (box, o, 2.0);
+      hits += cw_segment_hits_box (x0, y0, x1, y1, o);
     }
   for (guint i = 0; i < pl->segments->len; i++)
     {
       const CwBox *s = &g_array_index (pl->segments, CwBox, i);
 
-      if (cw_segment_hits_box (s->x, s->y, s->x + s->w, s->y + s->h, &grown))
-        return TRUE;
+      hits += cw_segment_hits_box (s->x, s->y, s->x + s->w, s->y + s->h, &grown);
     }
-  return FALSE;
+  return hits;
+}
+
+gboolean
+cw_placer_collides (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1)
+{
+  return cw_placer_count_hits (pl, box, x0, y0, x1, y1) > 0;
+}
+
+int
+cw_placer_place_label (const CwPlacer *pl, const char *markup, double size, double px, double py,
+                       double dx, double dy, double base, CwLabelPlace *place, CwLabelText *lt)
+{
+  int best = G_MAXINT;
+  CwLabelPlace cand;
+
+  /* Longer bonds first (up to about twice as long), then shorter ones; the first clear spot wins,
+   * else the one that hits least. The label text depends on the direction only. */
+  for (int t = 0; t < 31 && best > 0; t++)
+    {
+      double len = t < 26 ? base + 4.0 * t : base * (0.85 - 0.1 * (t - 26));
+      int hits;
+
+      cw_label_text_clear (lt);
+      cw_label_place (markup, size, px, py, dx, dy, len, &cand, lt);
+      hits = cw_placer_count_hits (pl, &cand.box, px, py, cand.ex, cand.ey);
+      if (hits < best)
+        {
+          best = hits;
+          *place = cand;
+        }
+    }
+  return best;
 }

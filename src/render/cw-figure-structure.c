@@ -13,7 +13,6 @@
 #define LABEL_SIZE 13.0
 #define NUMBER_SIZE 9.0
 #define SPLAY (G_PI / 6.4) /* half-angle between the two groups on one carbon */
-#define MAX_TRIES 24
 
 typedef struct
 {
@@ -30,24 +29,11 @@ place_sub (Layout *lay, const CwMolecule *mol, int i, double angle, const CwRend
   CwPoint a = lay->atom[sub->position - 1];
   double dx = cos (angle), dy = -sin (angle);
   double base = 0.62 * lay->radius;
-  CwLabelPlace place = { 0 }, first = { 0 };
+  CwLabelPlace place = { 0 };
   CwLabelText lt = { 0 };
-  gboolean found = FALSE;
   CwPrim *p;
 
-  /* Lengthen the bond until the label is clear of every label and bond drawn so far; the
-   * label text depends on the direction only, so it is the same on every try. */
-  for (int t = 0; t < MAX_TRIES && !found; t++)
-    {
-      cw_label_text_clear (&lt);
-      cw_label_place (sub->group->markup, LABEL_SIZE, a.x, a.y, dx, dy, base + 4.0 * t, &place, &lt);
-      if (t == 0)
-        first = place;
-      found = !cw_placer_collides (&lay->placer, &place.box, a.x, a.y, place.ex, place.ey);
-    }
-  if (!found)
-    place = first;
-
+  cw_placer_place_label (&lay->placer, sub->group->markup, LABEL_SIZE, a.x, a.y, dx, dy, base, &place, &lt);
   if (opt->highlight_sub == i)
     {
       p = cw_scene_add (lay->scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);

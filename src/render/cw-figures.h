@@ -1,6 +1,7 @@
 #pragma once
 
 #include "cw-chair-geometry.h"
+#include "cw-label.h"
 #include "cw-render.h"
 #include "cw-scene.h"
 
@@ -52,6 +53,11 @@ void     cw_placer_clear (CwPlacer *pl);
 void     cw_placer_add_segment (CwPlacer *pl, double x0, double y0, double x1, double y1);
 void     cw_placer_add_box (CwPlacer *pl, const CwBox *box);
 gboolean cw_placer_collides (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1);
+int      cw_placer_count_hits (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1);
+/* Places a label at the end of a bond from (px, py) along (dx, dy), trying bond lengths around
+ * base; returns how many labels and bonds the chosen spot still hits (0: clear). */
+int      cw_placer_place_label (const CwPlacer *pl, const char *markup, double size, double px, double py,
+                                double dx, double dy, double base, CwLabelPlace *place, CwLabelText *lt);
 
 /* Plot helpers shared by the profile and the scan. */
 typedef struct

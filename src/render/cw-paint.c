@@ -167,6 +167,20 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
   switch (p->kind)
     {
     case CW_PRIM_LINE:
+      if (p->halo)
+        {
+          /* Start the margin a little away from the line's own atom, which it must not erase. */
+          double f = 0.22;
+          set_ink (cr, CW_INK_BACKGROUND, is_dark);
+          cairo_set_line_width (cr, p->line_width + 4.0);
+          cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+          cairo_move_to (cr, p->x0 + (p->x1 - p->x0) * f, p->y0 + (p->y1 - p->y0) * f);
+          cairo_line_to (cr, p->x1, p->y1);
+          cairo_stroke (cr);
+          set_ink (cr, p->ink, is_dark);
+          cairo_set_line_width (cr, p->line_width);
+          cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
+        }
       cairo_move_to (cr, p->x0, p->y0);
       cairo_line_to (cr, p->x1, p->y1);
       cairo_stroke (cr);

@@ -80,11 +80,16 @@ cw_scene_append (CwScene *scene, const CwScene *src, double dx, double dy)
         }
       if (p.n_points > 0)
         {
+          guint first = p.first_point;
+
           p.first_point = scene->points->len;
           for (guint k = 0; k < p.n_points; k++)
             {
-              CwPoint q = g_array_index (src->points, CwPoint, src->first_point_dummy + 0);
-              (void) q;
+              CwPoint q = g_array_index (src->points, CwPoint, first + k);
+
+              q.x += dx;
+              q.y += dy;
+              g_array_append_val (scene->points, q);
             }
         }
       g_array_append_val (scene->prims, p);

@@ -88,6 +88,7 @@ typedef struct
   double wide;    /* wedge width at the wide end; marker size */
   double dash;    /* 0 solid, else dash length */
   gboolean fill;
+  gboolean halo;  /* lines: a background-coloured margin, so the line reads as in front */
   CwMarkerShape marker;
   guint first_point, n_points; /* polyline / polygon, into CwScene.points */
   /* text */

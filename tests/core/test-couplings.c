@@ -6,7 +6,7 @@
 #include "cw-couplings.h"
 #include "test-helpers.h"
 
-static CwData *data;
+static CwData         *data;
 static CwGeometryData *gd;
 
 /* Couplings of a ring at T, with the populations from the engine. */
@@ -16,7 +16,7 @@ compute (const char *spec, double kelvin, const char *set, CwCouplings *c, CwAna
   g_autoptr (GError) error = NULL;
   g_autoptr (CwMolecule) mol = *spec ? test_ring (data, spec) : cw_molecule_new ();
   CwAnalysis local;
-  double pop[2] = { 0.5, 0.5 };
+  double     pop[2] = { 0.5, 0.5 };
 
   if (an == NULL)
     an = &local;
@@ -44,12 +44,13 @@ static void
 log_proton (const CwCouplings *c, int i)
 {
   const CwRingProton *p = &c->protons[i];
-  g_autofree char *label = cw_ring_proton_dup_label (p);
+  g_autofree char    *label = cw_ring_proton_dup_label (p);
 
   for (int ch = 0; ch < 3; ch++)
     {
       g_autofree char *m = cw_multiplet_dup_text (&p->multiplet[ch]);
-      g_test_message ("%s [%s]: %s, width %.2f Hz", label, ch == 2 ? "avg" : ch ? "chair 2" : "chair 1",
+      g_test_message ("%s [%s]: %s, width %.2f Hz", label, ch == 2 ? "avg" : ch ? "chair 2"
+                                                                                : "chair 1",
                       m, ch == 2 ? p->width_avg : p->width[ch]);
     }
 }
@@ -64,9 +65,9 @@ static void
 test_equation (void)
 {
   const CwKarplusSet *set = cw_geometry_data_find_set (gd, "general");
-  double dchi = 1.3;
-  int xi = 1;
-  double base60 = 13.70 * 0.25 - 0.73 * 0.5;
+  double              dchi = 1.3;
+  int                 xi = 1;
+  double              base60 = 13.70 * 0.25 - 0.73 * 0.5;
 
   g_assert_nonnull (set);
   g_assert_cmpfloat_with_epsilon (cw_karplus_coupling (set, 0, NULL, NULL, 0), 12.97, 1e-9);
@@ -86,7 +87,7 @@ test_equation (void)
 static void
 test_cyclohexane (void)
 {
-  CwCouplings c;
+  CwCouplings              c;
   const CwVicinalCoupling *aa, *ae, *ee;
 
   compute ("", 298.15, NULL, &c, NULL);
@@ -112,7 +113,7 @@ test_cyclohexane (void)
   g_assert_cmpfloat_with_epsilon (aa->j[1], ee->j[0], 1e-9);
   g_assert_cmpfloat_with_epsilon (aa->j_avg, 0.5 * (aa->j[0] + ee->j[0]), 1e-9);
   /* the three other parameter sets give the same ordering */
-  for (const char **id = (const char *[]) { "two", CW_KARPLUS_BY_COUNT, NULL }; *id; id++)
+  for (const char **id = (const char *[]){ "two", CW_KARPLUS_BY_COUNT, NULL }; *id; id++)
     {
       compute ("", 298.15, *id, &c, NULL);
       aa = vicinal (&c, "1u", "2d");
@@ -133,10 +134,10 @@ test_cyclohexane (void)
 static void
 test_tert_butylcyclohexanol (void)
 {
-  CwCouplings trans, cis;
-  CwAnalysis an;
+  CwCouplings         trans, cis;
+  CwAnalysis          an;
   const CwRingProton *p;
-  int h;
+  int                 h;
 
   compute ("1u=hydroxy 4d=tert-butyl", 298.15, NULL, &trans, &an);
   g_assert_cmpfloat (an.pop[1], >, 0.999); /* chair 2: both equatorial */
@@ -172,8 +173,8 @@ test_multiplet (void)
 {
   struct
   {
-    double j[5];
-    int n;
+    double      j[5];
+    int         n;
     const char *text;
   } cases[] = {
     { { 11.6, 4.1, 11.6, 4.1 }, 4, "tt, 11.6, 4.1 Hz" },
@@ -189,7 +190,7 @@ test_multiplet (void)
 
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
     {
-      CwMultiplet m;
+      CwMultiplet      m;
       g_autofree char *text = NULL;
 
       cw_multiplet_build (cases[i].j, cases[i].n, 1.0, 1.0, &m);
@@ -204,13 +205,13 @@ test_multiplet (void)
 static void
 test_inverse_round_trip (void)
 {
-  for (const char **spec = (const char *[]) { "1u=hydroxy", "1u=methyl", "1u=bromo", NULL }; *spec; spec++)
+  for (const char **spec = (const char *[]){ "1u=hydroxy", "1u=methyl", "1u=bromo", NULL }; *spec; spec++)
     {
       g_autoptr (GError) error = NULL;
-      CwCouplings c;
-      CwAnalysis an;
+      CwCouplings     c;
+      CwAnalysis      an;
       CwInverseResult r;
-      int h;
+      int             h;
 
       compute (*spec, 298.15, NULL, &c, &an);
       h = cw_couplings_parse_proton (&c, "1", &error);
@@ -237,9 +238,9 @@ test_inverse_limits (void)
 {
   g_autoptr (GError) error = NULL;
   g_autofree char *msg = NULL;
-  CwCouplings c;
-  CwInverseResult r;
-  int h, cis2, far;
+  CwCouplings      c;
+  CwInverseResult  r;
+  int              h, cis2, far;
 
   compute ("1u=hydroxy", 298.15, NULL, &c, NULL);
   h = cw_couplings_parse_proton (&c, "1", &error);
@@ -292,7 +293,7 @@ test_proton_names (void)
   g_assert_cmpint (cw_couplings_parse_proton (&c, "1", NULL), ==, cw_couplings_find_proton (&c, 1, CW_FACE_DOWN));
   g_assert_cmpint (cw_couplings_parse_proton (&c, "H-2up", NULL), ==, cw_couplings_find_proton (&c, 2, CW_FACE_UP));
   g_assert_cmpint (cw_couplings_parse_proton (&c, "3 d", NULL), ==, cw_couplings_find_proton (&c, 3, CW_FACE_DOWN));
-  for (const char **bad = (const char *[]) { "1u", "2", "7", "0d", "2x", "", "12", NULL }; *bad; bad++)
+  for (const char **bad = (const char *[]){ "1u", "2", "7", "0d", "2x", "", "12", NULL }; *bad; bad++)
     {
       g_autoptr (GError) error = NULL;
       g_assert_cmpint (cw_couplings_parse_proton (&c, *bad, &error), ==, -1);
@@ -307,7 +308,7 @@ test_averages (void)
   g_autoptr (GError) error = NULL;
   g_autoptr (CwMolecule) mol = test_ring (data, "1u=methyl");
   CwCouplings c;
-  double pop[2] = { 0.25, 0.75 };
+  double      pop[2] = { 0.25, 0.75 };
 
   g_assert_true (cw_couplings_compute (gd, mol, pop, 200.0, NULL, &c, &error));
   for (int i = 0; i < c.n_vicinal; i++)

@@ -8,7 +8,7 @@
 #include "cw-geometry.h"
 #include "test-helpers.h"
 
-static CwData *data;
+static CwData         *data;
 static CwGeometryData *gd;
 
 static void
@@ -33,7 +33,7 @@ test_ring_geometry (void)
   g_assert_cmpint (g.n_atoms, ==, 18);
   for (int k = 0; k < 6; k++)
     {
-      int a = g.ring[k], b = g.ring[(k + 1) % 6], c = g.ring[(k + 2) % 6], d = g.ring[(k + 3) % 6];
+      int    a = g.ring[k], b = g.ring[(k + 1) % 6], c = g.ring[(k + 2) % 6], d = g.ring[(k + 3) % 6];
       double t = cw_chair_geometry_torsion (&g, a, b, c, d);
 
       g_assert_cmpfloat_with_epsilon (cw_chair_geometry_distance (&g, a, b), 1.526, 1e-9);
@@ -56,11 +56,11 @@ test_hydrogens (void)
   build ("", 0, &g);
   for (int pos = 1; pos <= 6; pos++)
     {
-      int c = g.ring[pos - 1];
-      int ax = cw_chair_geometry_slot (&g, pos, cw_chair_axial_face (0, pos));
-      int eq = cw_chair_geometry_slot (&g, pos, cw_chair_axial_face (0, pos) == CW_FACE_UP ? CW_FACE_DOWN : CW_FACE_UP);
+      int    c = g.ring[pos - 1];
+      int    ax = cw_chair_geometry_slot (&g, pos, cw_chair_axial_face (0, pos));
+      int    eq = cw_chair_geometry_slot (&g, pos, cw_chair_axial_face (0, pos) == CW_FACE_UP ? CW_FACE_DOWN : CW_FACE_UP);
       double dz = g.atoms[ax].xyz[2] - g.atoms[c].xyz[2];
-      int next = g.ring[pos % 6], next2 = g.ring[(pos + 1) % 6];
+      int    next = g.ring[pos % 6], next2 = g.ring[(pos + 1) % 6];
 
       g_assert_true (g.atoms[ax].axial);
       g_assert_false (g.atoms[eq].axial);
@@ -81,7 +81,7 @@ static void
 test_inversion (void)
 {
   CwChairGeometry g1, g2;
-  int s1, s2;
+  int             s1, s2;
 
   build ("1u=methyl", 0, &g1);
   build ("1u=methyl", 1, &g2);
@@ -105,7 +105,7 @@ test_vicinal_torsions (void)
   for (int ch = 0; ch < 2; ch++)
     {
       CwChairGeometry t, c;
-      double phi_t, phi_c;
+      double          phi_t, phi_c;
 
       build ("1u=chloro 2d=chloro", ch, &t);
       build ("1u=chloro 2u=chloro", ch, &c);
@@ -166,9 +166,9 @@ test_fragments (void)
   struct
   {
     const char *smiles;
-    CwElement first;
-    int n_neighbours;
-    int n_h;
+    CwElement   first;
+    int         n_neighbours;
+    int         n_h;
   } cases[] = {
     { "C", CW_EL_C, 0, 3 },
     { "C(C)C", CW_EL_C, 2, 1 },
@@ -200,7 +200,7 @@ test_fragments (void)
       g_assert_cmpint (info.n_neighbours, ==, cases[i].n_neighbours);
       g_assert_cmpint (info.n_hydrogens, ==, cases[i].n_h);
     }
-  for (const char **bad = (const char *[]) { "C(", "C1CC", ")C", "Xx", "", NULL }; *bad; bad++)
+  for (const char **bad = (const char *[]){ "C(", "C1CC", ")C", "Xx", "", NULL }; *bad; bad++)
     {
       g_autoptr (GError) error = NULL;
       CwFragmentInfo info;

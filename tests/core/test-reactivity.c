@@ -6,7 +6,7 @@
 #include "cw-reactivity.h"
 #include "test-helpers.h"
 
-static CwData *data;
+static CwData         *data;
 static CwGeometryData *gd;
 
 static void
@@ -49,10 +49,10 @@ find_alkene (const CwLeavingGroup *lg, int a, int b)
 static void
 test_menthyl_chlorides (void)
 {
-  CwReactivity men, neo;
-  CwAnalysis an_men, an_neo;
+  CwReactivity          men, neo;
+  CwAnalysis            an_men, an_neo;
   const CwLeavingGroup *lm, *ln;
-  const CwAlkene *a12, *a16;
+  const CwAlkene       *a12, *a16;
 
   /* chair 1: C1 and C5 axial up, C2 axial down; so 1d, 2u, 5d are all equatorial in chair 1 */
   compute ("1d=chloro 2u=isopropyl 5d=methyl", 298.15, &men, &an_men);
@@ -103,7 +103,7 @@ static void
 test_beta_hexachloro (void)
 {
   CwReactivity r;
-  CwAnalysis an;
+  CwAnalysis   an;
 
   compute ("1u=chloro 2d=chloro 3u=chloro 4d=chloro 5u=chloro 6d=chloro", 298.15, &r, &an);
   g_assert_cmpint (r.n_groups, ==, 6);
@@ -132,8 +132,8 @@ test_beta_hexachloro (void)
 static void
 test_neighbouring (void)
 {
-  CwReactivity r;
-  CwAnalysis an;
+  CwReactivity      r;
+  CwAnalysis        an;
   const CwAntiPair *p;
 
   compute ("1u=tosyloxy 2d=acetoxy", 298.15, &r, &an);
@@ -164,9 +164,9 @@ test_exocyclic_and_none (void)
   g_autoptr (GError) error = NULL;
   g_autoptr (CwMolecule) mol = test_ring (data, "1u=chloro 1d=methyl");
   g_autofree char *label = NULL;
-  CwReactivity r;
-  CwAnalysis an;
-  gboolean exo = FALSE;
+  CwReactivity     r;
+  CwAnalysis       an;
+  gboolean         exo = FALSE;
 
   compute ("1u=chloro 1d=methyl", 298.15, &r, &an);
   for (int i = 0; i < r.groups[0].n_alkenes; i++)

@@ -1,0 +1,741 @@
+/* cw-batch.c: streaming batch analysis of SMILES lines (see cw-batch.h).
+ *
+ * Fixed-size buffers throughout: the input is read in 1 MiB blocks, the output collected in a
+ * 256 KiB buffer, and results are remembered in a fixed direct-mapped cache keyed by the
+ * canonical molecule, so memory stays flat however long the input is. Numbers are formatted by
+ * hand (fixed decimals), which is several times faster than printf and gives the same digits. */
+#include "config.h"
+
+#include "cw-batch.h"
+
+#include <glib/gi18n-lib.h>
+#include <math.h>
+#include <string.h>
+#include <unistd.h>
+
+#include "cw-core-error.h"
+#include "cw-smiles-private.h"
+#include "cw-smiles.h"
+
+#define IN_SIZE (1 << 20)
+#define OUT_SIZE (1 << 18)
+#define CACHE_SLOTS 4096
+#define CACHE_TEXT 400
+#define MAX_MOLS 64
+#define MAX_FIELDS 64
+
+typedef struct
+{
+  gint64 key[CW_SM_KEY_LEN];
+  guint16 len;   /* 0: empty */
+  char text[CACHE_TEXT];
+} CacheEntry;
+
+typedef struct
+{
+  const CwData *data;
+  const CwBatchOptions *opt;
+  CwConditions cond;
+  CwSmilesReader *reader;
+  FILE *out;
+  FILE *err;
+  char *obuf;
+  gsize olen;
+  gboolean write_failed;
+  CwMolecule mols[MAX_MOLS];
+  CwAnalysis an;
+  GString *scratch;
+  GString *notes;
+  CacheEntry *cache;
+  CwBatchSummary *sum;
+  gboolean csv;
+  int smiles_col, id_col;
+  gboolean first_row;
+  gint64 last_progress;
+} Batch;
+
+/* ---- output ---- */
+
+static void
+flush_out (Batch *b)
+{
+  if (b->olen && fwrite (b->obuf, 1, b->olen, b->out) != b->olen)
+    b->write_failed = TRUE;
+  b->olen = 0;
+}
+
+static inline void
+put (Batch *b, const char *s, gsize n)
+{
+  if (b->olen + n > OUT_SIZE)
+    {
+      flush_out (b);
+      if (n > OUT_SIZE)
+        {
+          if (fwrite (s, 1, n, b->out) != n)
+            b->write_failed = TRUE;
+          return;
+        }
+    }
+  memcpy (b->obuf + b->olen, s, n);
+  b->olen += n;
+}
+
+static inline void
+puts_ (Batch *b, const char *s)
+{
+  put (b, s, strlen (s));
+}
+
+/* Fixed-point with `decimals` digits; falls back to printf for huge or odd values. */
+static int
+fmt_fixed (char *buf, double x, int decimals)
+{
+  static const double scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
+  guint64 v, ip, fp;
+  int n = 0;
+  char tmp[24];
+  int t = 0;
+
+  if (!isfinite (x) || fabs (x) >= 1e12)
+    return g_snprintf (buf, 32, "%.*g", decimals + 3, x);
+  if (x < 0)
+    {
+      v = (guint64) (-x * scale[decimals] + 0.5);
+      if (v != 0)
+        buf[n++] = '-';
+    }
+  else
+    v = (guint64) (x * scale[decimals] + 0.5);
+  ip = v / (guint64) scale[decimals];
+  fp = v % (guint64) scale[decimals];
+  do
+    tmp[t++] = '0' + ip % 10, ip /= 10;
+  while (ip);
+  while (t)
+    buf[n++] = tmp[--t];
+  if (decimals)
+    {
+      buf[n++] = '.';
+      for (int d = decimals - 1; d >= 0; d--)
+        {
+          buf[n + d] = '0' + fp % 10;
+          fp /= 10;
+        }
+      n += decimals;
+    }
+  buf[n] = '\0';
+  return n;
+}
+
+/* Four significant digits: fixed between 1e-3 and 1e6, else d.ddde±N. */
+static int
+fmt_sig (char *buf, double x)
+{
+  int e, n;
+
+  if (!isfinite (x) || x <= 0)
+    return g_snprintf (buf, 32, "%g", x);
+  e = (int) floor (log10 (x));
+  if (e >= -3 && e < 6)
+    return fmt_fixed (buf, x, MAX (0, 3 - e));
+  n = fmt_fixed (buf, x / pow (10, e), 3);
+  if (buf[0] == '1' && buf[1] == '0' && buf[2] == '.')
+    {
+      /* rounding gave 10.000 */
+      e++;
+      n = fmt_fixed (buf, x / pow (10, e), 3);
+    }
+  return n + g_snprintf (buf + n, 16, "e%d", e);
+}
+
+static void
+put_csv_field (Batch *b, const char *s, gsize n)
+{
+  gboolean quote = FALSE;
+
+  for (gsize i = 0; i < n; i++)
+    quote |= s[i] == ',' || s[i] == '"' || s[i] == '\n' || s[i] == '\r';
+  if (!quote)
+    {
+      put (b, s, n);
+      return;
+    }
+  put (b, "\"", 1);
+  for (gsize i = 0; i < n; i++)
+    {
+      if (s[i] == '"')
+        put (b, "\"", 1);
+      put (b, s + i, 1);
+    }
+  put (b, "\"", 1);
+}
+
+static void
+put_json_string (Batch *b, const char *s, gsize n)
+{
+  put (b, "\"", 1);
+  for (gsize i = 0; i < n; i++)
+    {
+      unsigned char c = s[i];
+      if (c == '"' || c == '\\')
+        {
+          put (b, "\\", 1);
+          put (b, s + i, 1);
+        }
+      else if (c < 0x20)
+        {
+          char esc[8];
+          g_snprintf (esc, sizeof esc, "\\u%04x", c);
+          put (b, esc, 6);
+        }
+      else
+        put (b, s + i, 1);
+    }
+  put (b, "\"", 1);
+}
+
+/* ---- one result ---- */
+
+static void
+append_num (GString *s, double x, int decimals)
+{
+  char buf[40];
+  g_string_append_len (s, buf, fmt_fixed (buf, x, decimals));
+}
+
+/* The part of a row that depends only on the molecule: SMILES … flags. */
+static void
+format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
+{
+  g_autofree char *config = cw_molecule_dup_configuration (m);
+  char buf[40];
+  guint32 seen = 0;
+  int n_flags = 0;
+
+  if (config[0] == '\0' && m->n_subs > 1)
+    {
+      g_free (config);
+      config = cw_molecule_dup_spec (m);
+    }
+  if (b->opt->json)
+    {
+      g_string_append (s, "\"smiles\":\"");
+      cw_smiles_reader_write (b->reader, m, s);
+      g_string_append (s, "\",\"configuration\":\"");
+      g_string_append (s, config);
+      g_string_append_printf (s, "\",\"major_chair\":%d,\"delta_g\":", an->major + 1);
+      append_num (s, an->delta_g, 3);
+      g_string_append (s, ",\"sigma\":");
+      append_num (s, an->sigma, 3);
+      g_string_append (s, ",\"K\":");
+      g_string_append_len (s, buf, fmt_sig (buf, an->K));
+      g_string_append (s, ",\"populations\":[");
+      append_num (s, an->pop[0], 4);
+      g_string_append_c (s, ',');
+      append_num (s, an->pop[1], 4);
+      g_string_append (s, "],\"major_interval\":[");
+      append_num (s, an->pop_low[an->major], 4);
+      g_string_append_c (s, ',');
+      append_num (s, an->pop_high[an->major], 4);
+      g_string_append (s, "],\"flags\":[");
+    }
+  else
+    {
+      cw_smiles_reader_write (b->reader, m, s);
+      g_string_append_c (s, ',');
+      g_string_append (s, config);
+      g_string_append_printf (s, ",%d,", an->major + 1);
+      append_num (s, an->delta_g, 3);
+      g_string_append_c (s, ',');
+      append_num (s, an->sigma, 3);
+      g_string_append_c (s, ',');
+      g_string_append_len (s, buf, fmt_sig (buf, an->K));
+      g_string_append_c (s, ',');
+      append_num (s, an->pop[0], 4);
+      g_string_append_c (s, ',');
+      append_num (s, an->pop[1], 4);
+      g_string_append_c (s, ',');
+      append_num (s, an->pop_low[an->major], 4);
+      g_string_append_c (s, ',');
+      append_num (s, an->pop_high[an->major], 4);
+      g_string_append_c (s, ',');
+    }
+  for (int k = 0; k < an->n_flags; k++)
+    {
+      CwFlagCode code = an->flags[k].code;
+      if (seen & (1u << code))
+        continue;
+      seen |= 1u << code;
+      if (b->opt->json)
+        g_string_append_printf (s, "%s\"%s\"", n_flags ? "," : "", cw_flag_code_to_string (code));
+      else
+        g_string_append_printf (s, "%s%s", n_flags ? ";" : "", cw_flag_code_to_string (code));
+      n_flags++;
+    }
+}
+
+static guint
+key_hash (const gint64 *key)
+{
+  guint64 h = 0x9e3779b97f4a7c15ull;
+  for (int i = 0; i < CW_SM_KEY_LEN; i++)
+    {
+      h ^= (guint64) key[i] + 0x9e3779b97f4a7c15ull + (h << 6) + (h >> 2);
+    }
+  return (guint) (h ^ (h >> 32)) & (CACHE_SLOTS - 1);
+}
+
+/* The molecule-dependent text, from the cache or computed; NULL (error set) on failure. */
+static const char *
+result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
+{
+  CwRingTransform id = { 1, 1, FALSE };
+  gint64 key[CW_SM_KEY_LEN];
+  CacheEntry *e;
+
+  cw_sm_molecule_key (m, &id, key);
+  e = &b->cache[key_hash (key)];
+  if (e->len && memcmp (e->key, key, sizeof key) == 0)
+    {
+      *len = e->len;
+      return e->text;
+    }
+  if (!cw_analyze (b->data, m, &b->cond, &b->an, error))
+    return NULL;
+  g_string_truncate (b->scratch, 0);
+  format_result (b, m, &b->an, b->scratch);
+  if (b->scratch->len < CACHE_TEXT)
+    {
+      memcpy (e->key, key, sizeof key);
+      memcpy (e->text, b->scratch->str, b->scratch->len);
+      e->len = b->scratch->len;
+    }
+  *len = b->scratch->len;
+  return b->scratch->str;
+}
+
+/* ---- rows ---- */
+
+static void
+row_start (Batch *b, guint64 line, const char *id, gsize id_len)
+{
+  char buf[32];
+  int n = fmt_fixed (buf, (double) line, 0);
+
+  if (b->opt->json)
+    {
+      puts_ (b, b->first_row ? "\n    {\"line\":" : ",\n    {\"line\":");
+      put (b, buf, n);
+      puts_ (b, ",\"id\":");
+      put_json_string (b, id, id_len);
+      put (b, ",", 1);
+    }
+  else
+    {
+      put (b, buf, n);
+      put (b, ",", 1);
+      put_csv_field (b, id, id_len);
+      put (b, ",", 1);
+    }
+  b->first_row = FALSE;
+}
+
+static void
+error_row (Batch *b, guint64 line, const char *id, gsize id_len, const char *message)
+{
+  const char *nl = strchr (message, '\n');
+  gsize n = nl ? (gsize) (nl - message) : strlen (message);
+
+  b->sum->errors++;
+  if (b->err)
+    fprintf (b->err, "%s: line %" G_GUINT64_FORMAT ": %s\n", b->opt->command, line, message);
+  row_start (b, line, id, id_len);
+  if (b->opt->json)
+    {
+      puts_ (b, "\"error\":");
+      put_json_string (b, message, n);
+      puts_ (b, "}");
+    }
+  else
+    {
+      puts_ (b, ",,,,,,,,,,,");
+      put_csv_field (b, message, n);
+      puts_ (b, "\n");
+    }
+}
+
+static void
+process_compound (Batch *b, guint64 line, const char *smiles, gsize len, const char *id, gsize id_len)
+{
+  g_autoptr (GError) error = NULL;
+  CwSmilesInfo info;
+  int n;
+
+  b->sum->compounds++;
+  if (b->notes)
+    g_string_truncate (b->notes, 0);
+  n = cw_smiles_reader_read (b->reader, smiles, len, b->mols, MAX_MOLS, &info, NULL, &error);
+  if (n < 0)
+    {
+      error_row (b, line, id, id_len, error->message);
+      return;
+    }
+  b->sum->analysed++;
+  b->sum->expanded += info.n_open > 0;
+  b->sum->salts += info.n_dropped > 0;
+  for (int i = 0; i < n; i++)
+    {
+      gsize tlen;
+      const char *text = result_text (b, &b->mols[i], &tlen, &error);
+      if (text == NULL)
+        {
+          error_row (b, line, id, id_len, error->message);
+          return;
+        }
+      row_start (b, line, id, id_len);
+      put (b, text, tlen);
+      if (b->opt->json)
+        {
+          if (info.n_open)
+            puts_ (b, tlen && text[tlen - 1] == '[' ? "\"open-stereo\"" : ",\"open-stereo\"");
+          if (info.n_dropped)
+            puts_ (b, (tlen && text[tlen - 1] == '[' && !info.n_open) ? "\"largest-part\"" : ",\"largest-part\"");
+          puts_ (b, "]}");
+        }
+      else
+        {
+          gboolean any = tlen && text[tlen - 1] != ',';
+          if (info.n_open)
+            puts_ (b, any ? ";open-stereo" : "open-stereo"), any = TRUE;
+          if (info.n_dropped)
+            puts_ (b, any ? ";largest-part" : "largest-part");
+          puts_ (b, ",\n");
+        }
+      b->sum->rows++;
+    }
+}
+
+/* ---- input ---- */
+
+/* Splits a CSV line into fields (double quotes honoured, quotes kept out of the fields only
+ * when the field is quoted as a whole). */
+static int
+split_csv (char *line, gsize len, char **field, gsize *flen)
+{
+  int n = 0;
+  gsize i = 0;
+
+  while (n < MAX_FIELDS)
+    {
+      if (i < len && line[i] == '"')
+        {
+          gsize start = ++i, w = start;
+          while (i < len)
+            {
+              if (line[i] == '"' && i + 1 < len && line[i + 1] == '"')
+                line[w++] = '"', i += 2;
+              else if (line[i] == '"')
+                {
+                  i++;
+                  break;
+                }
+              else
+                line[w++] = line[i++];
+            }
+          field[n] = line + start;
+          flen[n++] = w - start;
+          while (i < len && line[i] != ',')
+            i++;
+        }
+      else
+        {
+          gsize start = i;
+          while (i < len && line[i] != ',')
+            i++;
+          field[n] = line + start;
+          flen[n++] = i - start;
+        }
+      if (i >= len)
+        break;
+      i++; /* the comma */
+    }
+  return n;
+}
+
+static void
+trim (char **s, gsize *n)
+{
+  while (*n && g_ascii_isspace ((*s)[0]))
+    (*s)++, (*n)--;
+  while (*n && g_ascii_isspace ((*s)[*n - 1]))
+    (*n)--;
+}
+
+static gboolean
+is_header (char **field, gsize *flen, int n, Batch *b)
+{
+  b->smiles_col = -1;
+  b->id_col = -1;
+  for (int k = 0; k < n; k++)
+    {
+      char *f = field[k];
+      gsize l = flen[k];
+      trim (&f, &l);
+      if (l == 6 && g_ascii_strncasecmp (f, "smiles", 6) == 0 && b->smiles_col < 0)
+        b->smiles_col = k;
+      else if (b->id_col < 0 && ((l == 2 && g_ascii_strncasecmp (f, "id", 2) == 0) ||
+                                 (l == 4 && g_ascii_strncasecmp (f, "name", 4) == 0)))
+        b->id_col = k;
+    }
+  if (b->smiles_col < 0)
+    {
+      b->smiles_col = 0;
+      b->id_col = -1;
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static void
+process_line (Batch *b, char *line, gsize len)
+{
+  guint64 no = ++b->sum->lines;
+  char *smiles = line, *id = "";
+  gsize slen = len, ilen = 0;
+
+  if (len && line[len - 1] == '\r')
+    len--, slen--;
+  if (no == 1 && len >= 3 && (guchar) line[0] == 0xef && (guchar) line[1] == 0xbb && (guchar) line[2] == 0xbf)
+    line += 3, len -= 3, smiles = line, slen = len; /* UTF-8 byte order mark */
+  if (b->csv)
+    {
+      char *field[MAX_FIELDS];
+      gsize flen[MAX_FIELDS];
+      int n = split_csv (line, len, field, flen);
+      if (no == 1 && b->smiles_col == -2)
+        {
+          if (is_header (field, flen, n, b))
+            return;
+          b->id_col = n > 1 ? 1 : -1;
+        }
+      if (b->smiles_col >= n)
+        {
+          if (len)
+            error_row (b, no, "", 0, _("no SMILES column on this line"));
+          return;
+        }
+      smiles = field[b->smiles_col], slen = flen[b->smiles_col];
+      if (b->id_col >= 0 && b->id_col < n)
+        id = field[b->id_col], ilen = flen[b->id_col];
+      trim (&id, &ilen);
+    }
+  else
+    {
+      gsize i = 0;
+      while (i < len && !g_ascii_isspace (line[i]))
+        i++;
+      slen = i;
+      id = line + i, ilen = len - i;
+      trim (&id, &ilen);
+    }
+  trim (&smiles, &slen);
+  if (slen == 0 || smiles[0] == '#')
+    return;
+  process_compound (b, no, smiles, slen, id, ilen);
+}
+
+static void
+progress (Batch *b, gboolean final)
+{
+  gint64 now;
+
+  if (!b->opt->progress || b->err == NULL || !isatty (fileno (b->err)))
+    return;
+  now = g_get_monotonic_time ();
+  if (final)
+    {
+      if (b->last_progress)
+        fprintf (b->err, "\r\033[K");
+      return;
+    }
+  if (now - b->last_progress < 500000)
+    return;
+  b->last_progress = now;
+  fprintf (b->err, _("\r%s: %" G_GUINT64_FORMAT " lines, %" G_GUINT64_FORMAT " errors…"), b->opt->command,
+           b->sum->lines, b->sum->errors);
+  fflush (b->err);
+}
+
+static gboolean
+detect_csv (Batch *b, const char *buf, gsize n)
+{
+  const char *nl = memchr (buf, '\n', n);
+  gsize len = nl ? (gsize) (nl - buf) : n;
+  g_autofree char *first = g_ascii_strdown (buf, len);
+
+  return strstr (first, "smiles") != NULL && memchr (first, ',', len) != NULL;
+}
+
+static void
+write_head (Batch *b)
+{
+  char buf[40];
+
+  if (b->opt->json)
+    {
+      puts_ (b, "{\n  \"format\": \"chairwise-batch\",\n  \"version\": 1,\n  \"temperature_K\": ");
+      put (b, buf, fmt_fixed (buf, b->cond.temperature, 2));
+      puts_ (b, ",\n  \"solvent\": \"");
+      puts_ (b, cw_solvent_to_string (b->cond.solvent));
+      puts_ (b, "\",\n  \"energy_unit\": \"kcal/mol\",\n  \"caution\": ");
+      put_json_string (b, cw_caution_text (), strlen (cw_caution_text ()));
+      puts_ (b, ",\n  \"results\": [");
+    }
+  else
+    puts_ (b, "line,id,smiles,configuration,major_chair,delta_g_kcal,sigma_kcal,K,x_chair1,x_chair2,"
+              "x_major_low,x_major_high,flags,error\n");
+}
+
+static void
+write_tail (Batch *b)
+{
+  if (!b->opt->json)
+    return;
+  g_string_printf (b->scratch,
+                   "\n  ],\n  \"summary\": {\"lines\": %" G_GUINT64_FORMAT ", \"compounds\": %" G_GUINT64_FORMAT
+                   ", \"analysed\": %" G_GUINT64_FORMAT ", \"rows\": %" G_GUINT64_FORMAT
+                   ", \"errors\": %" G_GUINT64_FORMAT ", \"open_stereo\": %" G_GUINT64_FORMAT "}\n}\n",
+                   b->sum->lines, b->sum->compounds, b->sum->analysed, b->sum->rows, b->sum->errors,
+                   b->sum->expanded);
+  puts_ (b, b->scratch->str);
+}
+
+void
+cw_batch_options_init (CwBatchOptions *opt)
+{
+  memset (opt, 0, sizeof *opt);
+  opt->temperature = 298.15;
+  opt->solvent = CW_SOLVENT_APROTIC;
+  opt->input = CW_BATCH_INPUT_AUTO;
+  opt->command = "chairwise-calc batch";
+}
+
+gboolean
+cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchOptions *opt,
+              CwBatchSummary *summary, GError **error)
+{
+  Batch *b = g_new0 (Batch, 1);
+  char *ibuf = g_malloc (IN_SIZE + 1);
+  gsize have = 0;
+  gboolean eof = FALSE, ok = TRUE, skipping = FALSE;
+  gint64 t0 = g_get_monotonic_time ();
+
+  memset (summary, 0, sizeof *summary);
+  b->data = data;
+  b->opt = opt;
+  b->cond.temperature = opt->temperature;
+  b->cond.solvent = opt->solvent;
+  b->reader = cw_smiles_reader_new (data->groups);
+  b->out = out;
+  b->err = err;
+  b->obuf = g_malloc (OUT_SIZE);
+  b->scratch = g_string_sized_new (512);
+  b->cache = g_new0 (CacheEntry, CACHE_SLOTS);
+  b->sum = summary;
+  b->first_row = TRUE;
+  b->smiles_col = -2;
+  if (!cw_check_temperature (opt->temperature, error))
+    {
+      ok = FALSE;
+      goto out;
+    }
+  write_head (b);
+  while (!eof || have > 0)
+    {
+      gsize start = 0;
+      if (!eof)
+        {
+          gsize n = fread (ibuf + have, 1, IN_SIZE - have, in);
+          if (n == 0)
+            {
+              if (ferror (in))
+                {
+                  g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_IO, _("reading the input failed"));
+                  ok = FALSE;
+                  goto out;
+                }
+              eof = TRUE;
+            }
+          if (summary->lines == 0 && have == 0 && n > 0)
+            b->csv = opt->input == CW_BATCH_INPUT_CSV ||
+                      (opt->input == CW_BATCH_INPUT_AUTO && detect_csv (b, ibuf, n));
+          have += n;
+        }
+      for (;;)
+        {
+          char *nl = memchr (ibuf + start, '\n', have - start);
+          if (nl == NULL)
+            break;
+          if (!skipping)
+            process_line (b, ibuf + start, nl - (ibuf + start));
+          else
+            skipping = FALSE;
+          start = nl - ibuf + 1;
+          if ((summary->lines & 0xffff) == 0)
+            progress (b, FALSE);
+        }
+      if (eof && start < have)
+        {
+          if (!skipping)
+            process_line (b, ibuf + start, have - start);
+          start = have;
+        }
+      if (start == 0 && have == IN_SIZE)
+        {
+          /* a line longer than the buffer: report it and skip to its end */
+          error_row (b, ++summary->lines, "", 0, _("line longer than 1 MiB"));
+          skipping = TRUE;
+          start = have;
+        }
+      memmove (ibuf, ibuf + start, have - start);
+      have -= start;
+      if (eof)
+        break;
+    }
+  write_tail (b);
+  progress (b, TRUE);
+  flush_out (b);
+  if (b->write_failed || fflush (out) != 0)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_IO, _("writing the results failed"));
+      ok = FALSE;
+    }
+out:
+  summary->seconds = (g_get_monotonic_time () - t0) / 1e6;
+  cw_smiles_reader_free (b->reader);
+  g_free (b->obuf);
+  g_free (b->cache);
+  g_string_free (b->scratch, TRUE);
+  g_free (ibuf);
+  g_free (b);
+  return ok;
+}
+
+char *
+cw_batch_summary_dup_text (const CwBatchSummary *s)
+{
+  GString *t = g_string_new (NULL);
+
+  g_string_append_printf (t, _("%" G_GUINT64_FORMAT " compounds in %" G_GUINT64_FORMAT " lines: %" G_GUINT64_FORMAT
+                               " analysed (%" G_GUINT64_FORMAT " rows), %" G_GUINT64_FORMAT " with errors"),
+                          s->compounds, s->lines, s->analysed, s->rows, s->errors);
+  if (s->expanded)
+    g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with open ring stereocentres (one row per cis/trans isomer)"),
+                            s->expanded);
+  if (s->salts)
+    g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with parts left out (largest part kept)"), s->salts);
+  g_string_append_printf (t, _("; %.2f s (%.0f compounds/s)"), s->seconds,
+                          s->seconds > 0 ? s->compounds / s->seconds : 0.0);
+  return g_string_free (t, FALSE);
+}

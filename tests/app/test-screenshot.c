@@ -1,0 +1,101 @@
+#include "config.h"
+
+#include "app-test-helpers.h"
+#include "cw-window-private.h"
+
+/* Pixels of rect (in window coordinates) that differ from the rect's most common colour. */
+static double
+busy_fraction (const guint32 *px,
+               int            stride,
+               int            x0,
+               int            y0,
+               int            w,
+               int            h,
+               guint         *n_colours)
+{
+  g_autoptr (GHashTable) counts = g_hash_table_new (NULL, NULL);
+  guint best = 0, total = 0;
+  GHashTableIter it;
+  gpointer key, value;
+
+  for (int y = y0; y < y0 + h; y++)
+    for (int x = x0; x < x0 + w; x++)
+      {
+        guint32 c = px[y * stride + x];
+        guint n = GPOINTER_TO_UINT (g_hash_table_lookup (counts, GUINT_TO_POINTER (c))) + 1;
+
+        g_hash_table_insert (counts, GUINT_TO_POINTER (c), GUINT_TO_POINTER (n));
+        total++;
+      }
+  g_hash_table_iter_init (&it, counts);
+  while (g_hash_table_iter_next (&it, &key, &value))
+    best = MAX (best, GPOINTER_TO_UINT (value));
+  *n_colours = g_hash_table_size (counts);
+  return total ? 1.0 - (double) best / total : 0.0;
+}
+
+static void
+test_screenshot_not_blank (void)
+{
+  CwWindow *win = g_object_new (CW_TYPE_WINDOW, NULL);
+  g_autofree char *demo = g_build_filename (cw_data_find_dir (), "demo.json", NULL);
+  g_autofree char *path = app_test_tmp_path ("window.png");
+  g_autoptr (GFile) file = g_file_new_for_path (demo);
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  g_autofree guint32 *px = NULL;
+  graphene_rect_t bounds;
+  guint n_colours;
+  int w, h;
+  double busy;
+
+  g_assert_true (cw_window_open_file (win, file, &error));
+  g_assert_no_error (error);
+  gtk_window_set_default_size (GTK_WINDOW (win), 1100, 760);
+  gtk_window_present (GTK_WINDOW (win));
+  app_test_wait_mapped (GTK_WIDGET (win));
+
+  g_assert_true (cw_window_save_screenshot (win, path, &error));
+  g_assert_no_error (error);
+  texture = gdk_texture_new_from_filename (path, &error);
+  g_assert_no_error (error);
+  w = gdk_texture_get_width (texture);
+  h = gdk_texture_get_height (texture);
+  g_assert_cmpint (w, >=, 600);
+  g_assert_cmpint (h, >=, 400);
+  px = g_new (guint32, (gsize) w * h);
+  gdk_texture_download (texture, (guchar *) px, (gsize) w * 4);
+
+  /* The whole window: text, ring and figures make a busy, many-coloured image. */
+  busy = busy_fraction (px, w, 0, 0, w, h, &n_colours);
+  g_test_message ("window: %.1f %% non-background pixels, %u colours", busy * 100, n_colours);
+  g_assert_cmpfloat (busy, >, 0.03);
+  g_assert_cmpuint (n_colours, >, 30);
+
+  /* The chairs figure itself was drawn. */
+  g_assert_true (gtk_widget_compute_bounds (GTK_WIDGET (win->chairs_area), GTK_WIDGET (win), &bounds));
+  busy = busy_fraction (px, w, (int) bounds.origin.x, (int) bounds.origin.y,
+                        MIN ((int) bounds.size.width, w - (int) bounds.origin.x),
+                        MIN ((int) bounds.size.height, h - (int) bounds.origin.y), &n_colours);
+  g_test_message ("chairs: %.1f %% non-background pixels, %u colours", busy * 100, n_colours);
+  g_assert_cmpfloat (busy, >, 0.01);
+
+  /* So was the ring canvas. */
+  g_assert_true (gtk_widget_compute_bounds (GTK_WIDGET (win->ring_canvas), GTK_WIDGET (win), &bounds));
+  busy = busy_fraction (px, w, (int) bounds.origin.x, (int) bounds.origin.y,
+                        MIN ((int) bounds.size.width, w - (int) bounds.origin.x),
+                        MIN ((int) bounds.size.height, h - (int) bounds.origin.y), &n_colours);
+  g_assert_cmpfloat (busy, >, 0.01);
+
+  win->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (win));
+}
+
+int
+main (int argc, char *argv[])
+{
+  if (!app_test_init (&argc, &argv))
+    return 0;
+  g_test_add_func ("/app/screenshot/not-blank", test_screenshot_not_blank);
+  return g_test_run ();
+}

@@ -1,0 +1,365 @@
+#include "config.h"
+
+#include <math.h>
+
+#include "app-test-helpers.h"
+#include "cw-window-private.h"
+
+/* Reference values, independent of the core:
+ * - A(Me) from Booth & Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255: axial -> equatorial
+ *   dH = -1.75 kcal/mol, dS = -0.03 cal/(mol K), so A(T) = 1.75 - T * 0.03e-3 kcal/mol.
+ * - R = 8.314462618 J/(mol K) (CODATA 2018), 1 cal = 4.184 J (thermochemical calorie). */
+#define R_KCAL (8.314462618 / 4184.0)
+
+static double
+methyl_a (double t)
+{
+  return 1.75 - t * 0.03e-3;
+}
+
+/* Fraction of the chair with methyl equatorial, from the Boltzmann ratio. */
+static double
+equatorial_fraction (double a, double t)
+{
+  return 1.0 / (1.0 + exp (-a / (R_KCAL * t)));
+}
+
+static CwWindow *
+new_window (void)
+{
+  CwWindow *win = g_object_new (CW_TYPE_WINDOW, NULL);
+
+  gtk_window_present (GTK_WINDOW (win));
+  app_test_wait_mapped (GTK_WIDGET (win));
+  return win;
+}
+
+static void
+destroy_window (CwWindow *win)
+{
+  win->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (win));
+  app_test_pump (20, NULL);
+}
+
+static void
+set_group (CwWindow *win, int pos, const char *face, const char *id)
+{
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", pos, face, id);
+}
+
+static char *
+expected_pop (int chair, double frac)
+{
+  return g_strdup_printf ("Chair %d: %.1f %%", chair, frac * 100.0);
+}
+
+static void
+test_edit_updates_results (void)
+{
+  CwWindow *win = new_window ();
+  double t = 298.15;
+  double x_eq = equatorial_fraction (methyl_a (t), t);
+  g_autofree char *pop2 = expected_pop (2, x_eq);
+  g_autofree char *pop1 = expected_pop (1, 1.0 - x_eq);
+  const CwAnalysis *an;
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
+  g_assert_cmpstr (gtk_label_get_text (win->pop1_label), ==, "Chair 1: 50.0 % (50.0–50.0 %)");
+
+  /* Methyl on the up face of C1: axial in chair 1 (SCIENCE.md §1), equatorial in chair 2. */
+  set_group (win, 1, "up", "methyl");
+  an = cw_window_get_analysis (win);
+  g_assert_nonnull (an);
+  g_assert_cmpfloat_with_epsilon (an->delta_g, -methyl_a (t), 0.01);
+  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop2_label), pop2));
+  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop1_label), pop1));
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (win->pop2_label), "cw-major"));
+  g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kcal/mol"));
+  g_assert_true (cw_window_get_modified (win));
+  /* The terms table lists the axial methyl (header row + term + total = 3 rows, 4 columns). */
+  g_assert_nonnull (gtk_grid_get_child_at (win->terms_grid, 0, 2));
+  g_assert_nonnull (strstr (gtk_label_get_text (GTK_LABEL (gtk_grid_get_child_at (win->terms_grid, 3, 1))), "Booth"));
+
+  /* kJ/mol: the same ΔG° times 4.184 shows in the result line. */
+  g_settings_set_string (win->settings, "energy-unit", "kj");
+  {
+    g_autofree char *kj = g_strdup_printf ("%+.2f", -methyl_a (t) * 4.184);
+    g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), kj));
+    g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kJ/mol"));
+  }
+  g_settings_set_string (win->settings, "energy-unit", "kcal");
+
+  /* At -78 °C the equatorial chair gains. */
+  t = 195.15;
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
+  {
+    g_autofree char *cold = expected_pop (2, equatorial_fraction (methyl_a (t), t));
+    g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop2_label), cold));
+  }
+  destroy_window (win);
+}
+
+static void
+test_undo_redo (void)
+{
+  CwWindow *win = new_window ();
+  g_autofree char *spec = NULL;
+
+  set_group (win, 1, "up", "methyl");
+  set_group (win, 3, "up", "methyl");
+  g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 2);
+  /* cis-1,3-dimethyl: diaxial chair 1 carries the syn-axial Me/Me pair, so chair 2 wins strongly. */
+  g_assert_cmpfloat (cw_window_get_analysis (win)->pop[1], >, 0.999);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 1);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 0);
+  g_assert_false (cw_window_get_modified (win));
+  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop1_label), "Chair 1: 50.0 %"));
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
+  spec = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (win)));
+  g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 2);
+  g_assert_true (cw_window_get_modified (win));
+
+  /* Removing and clearing are edits too. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.clear-carbon", "i", 3);
+  g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 1);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  {
+    g_autofree char *again = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (win)));
+    g_assert_cmpstr (again, ==, spec);
+  }
+  destroy_window (win);
+}
+
+static void
+test_geminal_and_custom (void)
+{
+  CwWindow *win = new_window ();
+  const CwMolecule *mol;
+
+  set_group (win, 2, "up", "methyl");
+  set_group (win, 2, "down", "phenyl");
+  mol = cw_document_peek_molecule (cw_window_get_document (win));
+  g_assert_nonnull (cw_molecule_get (mol, 2, CW_FACE_UP));
+  g_assert_nonnull (cw_molecule_get (mol, 2, CW_FACE_DOWN));
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.place-custom-group", "(sddsis)", "CH2OTBS", 1.5, 0.3,
+                              "my own estimate", 4, "down");
+  mol = cw_document_peek_molecule (cw_window_get_document (win));
+  g_assert_nonnull (cw_molecule_get (mol, 4, CW_FACE_DOWN));
+  g_assert_true (cw_molecule_get (mol, 4, CW_FACE_DOWN)->group->custom);
+  g_assert_cmpfloat_with_epsilon (cw_molecule_get (mol, 4, CW_FACE_DOWN)->group->a, 1.5, 1e-9);
+  g_assert_true (cw_analysis_has_flag (cw_window_get_analysis (win), CW_FLAG_CUSTOM_GROUP));
+  destroy_window (win);
+}
+
+static void
+test_save_open_round_trip (void)
+{
+  CwWindow *win = new_window ();
+  CwWindow *other;
+  g_autofree char *path = app_test_tmp_path ("round-trip.json");
+  g_autofree char *spec1 = NULL, *spec2 = NULL;
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+
+  set_group (win, 1, "up", "tert-butyl");
+  set_group (win, 3, "down", "chloro");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.place-custom-group", "(sddsis)", "Xq", 0.8, 0.1, "test value",
+                              5, "up");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", 223.15);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save-to", "s", path);
+  g_assert_false (cw_window_get_modified (win));
+  g_assert_true (g_file_test (path, G_FILE_TEST_EXISTS));
+  spec1 = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (win)));
+
+  other = new_window ();
+  g_assert_true (cw_window_open_file (other, file, &error));
+  g_assert_no_error (error);
+  spec2 = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (other)));
+  g_assert_cmpstr (spec1, ==, spec2);
+  g_assert_cmpfloat_with_epsilon (cw_document_get_temperature (cw_window_get_document (other)), 223.15, 1e-9);
+  g_assert_cmpfloat_with_epsilon (cw_window_get_analysis (other)->delta_g, cw_window_get_analysis (win)->delta_g,
+                                  1e-9);
+  g_assert_false (cw_window_get_modified (other));
+  /* The opened file went into the recent list. */
+  {
+    g_auto (GStrv) recent = g_settings_get_strv (other->settings, "recent-files");
+    g_assert_cmpstr (recent[0], ==, path);
+  }
+  destroy_window (other);
+  destroy_window (win);
+}
+
+static void
+test_open_bad_file (void)
+{
+  CwWindow *win = new_window ();
+  g_autofree char *path = app_test_tmp_path ("bad.json");
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+
+  g_assert_true (g_file_set_contents (path, "{ \"format\": \"chairwise-document\", ", -1, NULL));
+  g_assert_false (cw_window_open_file (win, file, &error));
+  g_assert_nonnull (error);
+  /* The window keeps its (empty) document. */
+  g_assert_true (cw_window_is_pristine (win));
+  destroy_window (win);
+}
+
+static gboolean
+has_magic (const char *path, const char *magic, gsize len)
+{
+  g_autofree char *contents = NULL;
+  gsize n = 0;
+
+  if (!g_file_get_contents (path, &contents, &n, NULL))
+    return FALSE;
+  return n > len && memcmp (contents, magic, len) == 0;
+}
+
+static void
+test_export (void)
+{
+  CwWindow *win = new_window ();
+  g_autofree char *png = app_test_tmp_path ("chairs.png");
+  g_autofree char *svg = app_test_tmp_path ("profile.svg");
+  g_autofree char *pdf = app_test_tmp_path ("scan.pdf");
+  g_autofree char *report = app_test_tmp_path ("report.pdf");
+  g_autoptr (GdkTexture) texture = NULL;
+
+  set_group (win, 1, "up", "methyl");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "chairs.png", png);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "profile.svg", svg);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "scan.pdf", pdf);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "report-a4.pdf", report);
+  /* File signatures from the PNG (RFC 2083), PDF (ISO 32000) and XML specifications. */
+  g_assert_true (has_magic (png, "\x89PNG\r\n\x1a\n", 8));
+  g_assert_true (has_magic (svg, "<?xml", 5));
+  g_assert_true (has_magic (pdf, "%PDF-", 5));
+  g_assert_true (has_magic (report, "%PDF-", 5));
+  texture = gdk_texture_new_from_filename (png, NULL);
+  g_assert_nonnull (texture);
+  g_assert_cmpint (gdk_texture_get_width (texture), >, 100);
+  destroy_window (win);
+}
+
+static void
+test_copy_figure (void)
+{
+  CwWindow *win = new_window ();
+  GdkClipboard *clipboard = gtk_widget_get_clipboard (GTK_WIDGET (win));
+  GdkContentFormats *formats;
+
+  set_group (win, 1, "up", "methyl");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.copy-figure", "s", "chairs");
+  formats = gdk_clipboard_get_formats (clipboard);
+  g_assert_true (gdk_clipboard_is_local (clipboard));
+  g_assert_true (gdk_content_formats_contain_mime_type (formats, "image/png"));
+  g_assert_true (gdk_content_formats_contain_mime_type (formats, "image/svg+xml"));
+  destroy_window (win);
+}
+
+static void
+test_unsaved_changes (void)
+{
+  CwWindow *win = new_window ();
+  g_autofree char *path = app_test_tmp_path ("unsaved.json");
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  gpointer weak = win;
+
+  g_object_add_weak_pointer (G_OBJECT (win), &weak);
+  set_group (win, 1, "up", "methyl");
+
+  /* Close with changes: the window stays and asks. Cancel keeps it. */
+  gtk_window_close (GTK_WINDOW (win));
+  app_test_pump (50, NULL);
+  g_assert_nonnull (weak);
+  g_assert_nonnull (win->pending_dialog);
+  gtk_dialog_response (GTK_DIALOG (win->pending_dialog), GTK_RESPONSE_CANCEL);
+  app_test_pump (50, NULL);
+  g_assert_nonnull (weak);
+  g_assert_null (win->pending_dialog);
+
+  /* Save: with a file already set, the document is written and the window closes. */
+  g_set_object (&win->file, file);
+  gtk_window_close (GTK_WINDOW (win));
+  app_test_pump (50, NULL);
+  g_assert_nonnull (win->pending_dialog);
+  gtk_dialog_response (GTK_DIALOG (win->pending_dialog), GTK_RESPONSE_ACCEPT);
+  app_test_pump (100, NULL);
+  g_assert_null (weak);
+  g_assert_true (g_file_test (path, G_FILE_TEST_EXISTS));
+
+  /* Discard: the window closes and the changes are not written. */
+  win = new_window ();
+  weak = win;
+  g_object_add_weak_pointer (G_OBJECT (win), &weak);
+  set_group (win, 2, "down", "bromo");
+  gtk_window_close (GTK_WINDOW (win));
+  app_test_pump (50, NULL);
+  g_assert_nonnull (win->pending_dialog);
+  gtk_dialog_response (GTK_DIALOG (win->pending_dialog), GTK_RESPONSE_REJECT);
+  app_test_pump (100, NULL);
+  g_assert_null (weak);
+}
+
+static void
+test_autosave_restore (void)
+{
+  CwWindow *win = new_window ();
+  CwWindow *other;
+  g_autofree char *saved_path = NULL;
+  g_autofree char *spec = NULL;
+  g_autoptr (GError) error = NULL;
+
+  set_group (win, 1, "up", "isopropyl");
+  /* The autosave timer runs after a few seconds; run it now. */
+  g_assert_cmpuint (win->autosave_id, !=, 0);
+  g_source_remove (win->autosave_id);
+  win->autosave_id = 0;
+  cw_window_schedule_autosave (win);
+  {
+    GSource *src = g_main_context_find_source_by_id (NULL, win->autosave_id);
+    g_source_set_ready_time (src, 0);
+  }
+  app_test_pump (50, NULL);
+  g_assert_nonnull (win->autosave_path);
+  g_assert_true (g_file_test (win->autosave_path, G_FILE_TEST_EXISTS));
+  saved_path = g_strdup (win->autosave_path);
+  spec = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (win)));
+
+  /* As after a crash: another window restores the file, marked as modified. */
+  other = new_window ();
+  g_assert_true (cw_window_restore_autosave (other, saved_path, &error));
+  g_assert_no_error (error);
+  g_assert_true (cw_window_get_modified (other));
+  {
+    g_autofree char *again = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (other)));
+    g_assert_cmpstr (again, ==, spec);
+  }
+  g_assert_false (g_file_test (saved_path, G_FILE_TEST_EXISTS));
+  destroy_window (other);
+  destroy_window (win);
+}
+
+int
+main (int argc, char *argv[])
+{
+  if (!app_test_init (&argc, &argv))
+    return 0;
+  g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
+  g_test_add_func ("/app/window/undo-redo", test_undo_redo);
+  g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
+  g_test_add_func ("/app/window/save-open-round-trip", test_save_open_round_trip);
+  g_test_add_func ("/app/window/open-bad-file", test_open_bad_file);
+  g_test_add_func ("/app/window/export", test_export);
+  g_test_add_func ("/app/window/copy-figure", test_copy_figure);
+  g_test_add_func ("/app/window/unsaved-changes", test_unsaved_changes);
+  g_test_add_func ("/app/window/autosave-restore", test_autosave_restore);
+  return g_test_run ();
+}

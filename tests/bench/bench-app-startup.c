@@ -1,0 +1,82 @@
+/* Benchmark: start of the chairwise process to its first painted frame, and resident
+ * memory then, with the demo document open. Runs the real program with --screenshot,
+ * which prints "first-frame-ms:" and "resident-kib:" at its first frame.
+ * Targets: first frame <= 300 ms (measured from spawn, here), RSS <= 60 MB. */
+#include "config.h"
+
+#include <gio/gio.h>
+#include <stdio.h>
+#include <stdlib.h>
+
+#define RUNS 5
+
+static int
+cmp_double (const void *a, const void *b)
+{
+  double x = *(const double *) a, y = *(const double *) b;
+  return (x > y) - (x < y);
+}
+
+int
+main (int argc, char *argv[])
+{
+  double frame_ms[RUNS], rss_mb[RUNS];
+  g_autofree char *shot = NULL;
+  g_autofree char *dir = g_dir_make_tmp ("cw-bench-XXXXXX", NULL);
+
+  if (argc < 2)
+    {
+      fprintf (stderr, "usage: %s PATH-TO-CHAIRWISE\n", argv[0]);
+      return 2;
+    }
+  if (g_getenv ("DISPLAY") == NULL)
+    {
+      printf ("no display: benchmark skipped\n");
+      return 77;
+    }
+  shot = g_build_filename (dir, "startup.png", NULL);
+  g_setenv ("XDG_STATE_HOME", dir, TRUE);
+  for (int r = 0; r < RUNS; r++)
+    {
+      g_autoptr (GError) error = NULL;
+      g_autoptr (GSubprocess) proc = NULL;
+      g_autoptr (GDataInputStream) in = NULL;
+      gint64 t0 = g_get_monotonic_time ();
+      char *line;
+
+      frame_ms[r] = rss_mb[r] = -1;
+      proc = g_subprocess_new (G_SUBPROCESS_FLAGS_STDOUT_PIPE, &error, argv[1], "--screenshot", shot, "--demo",
+                               NULL);
+      if (proc == NULL)
+        {
+          fprintf (stderr, "%s\n", error->message);
+          return 1;
+        }
+      in = g_data_input_stream_new (g_subprocess_get_stdout_pipe (proc));
+      while ((line = g_data_input_stream_read_line_utf8 (in, NULL, NULL, NULL)) != NULL)
+        {
+          if (g_str_has_prefix (line, "first-frame-ms:"))
+            frame_ms[r] = (g_get_monotonic_time () - t0) / 1000.0;
+          else if (g_str_has_prefix (line, "resident-kib:"))
+            rss_mb[r] = g_ascii_strtod (line + 13, NULL) / 1024.0;
+          g_free (line);
+        }
+      g_subprocess_wait (proc, NULL, NULL);
+      if (frame_ms[r] < 0 || rss_mb[r] < 0)
+        {
+          fprintf (stderr, "run %d: the program printed no timing\n", r);
+          return 1;
+        }
+      printf ("run %d: first frame %.1f ms, resident %.1f MB\n", r, frame_ms[r], rss_mb[r]);
+    }
+  qsort (frame_ms, RUNS, sizeof (double), cmp_double);
+  qsort (rss_mb, RUNS, sizeof (double), cmp_double);
+  printf ("start to first frame median: %.1f ms (max %.1f)\n", frame_ms[RUNS / 2], frame_ms[RUNS - 1]);
+  printf ("resident memory median: %.1f MB (max %.1f)\n", rss_mb[RUNS / 2], rss_mb[RUNS - 1]);
+  if (frame_ms[RUNS / 2] > 300.0 || rss_mb[RUNS / 2] > 60.0)
+    {
+      printf ("FAIL: targets are first frame <= 300 ms and resident memory <= 60 MB\n");
+      return 1;
+    }
+  return 0;
+}
