@@ -2,7 +2,9 @@
 
 #include "cw-app-data.h"
 
+#define G_SETTINGS_ENABLE_BACKEND
 #include <gio/gio.h>
+#include <gio/gsettingsbackend.h>
 
 #define DATA_PATH "/org/chairwise/Chairwise/data/"
 
@@ -13,7 +15,7 @@ load_from_resources (GError **error)
   g_autoptr (GBytes) ib = NULL;
   g_autoptr (CwGroupTable) groups = NULL;
   g_autoptr (CwInteractionTable) inter = NULL;
-  gsize len;
+  gsize       len;
   const char *p;
 
   gb = g_resources_lookup_data (DATA_PATH "groups.json", G_RESOURCE_LOOKUP_FLAGS_NONE, error);
@@ -37,7 +39,7 @@ const CwData *
 cw_app_get_data (GError **error)
 {
   static CwData *data;
-  const char *dir;
+  const char    *dir;
 
   if (data != NULL)
     return data;
@@ -47,4 +49,56 @@ cw_app_get_data (GError **error)
   else
     data = load_from_resources (error);
   return data;
+}
+
+const CwGeometryData *
+cw_app_get_geometry (GError **error)
+{
+  static CwGeometryData *gd;
+  const char            *dir;
+
+  if (gd != NULL)
+    return gd;
+  dir = g_getenv ("CHAIRWISE_DATADIR");
+  if (dir != NULL && *dir != '\0')
+    gd = cw_geometry_data_new_from_dir (dir, error);
+  else
+    {
+      g_autoptr (GBytes) bytes = g_resources_lookup_data (DATA_PATH "geometry.json", G_RESOURCE_LOOKUP_FLAGS_NONE, error);
+      gsize       len;
+      const char *p;
+
+      if (bytes == NULL)
+        return NULL;
+      p = g_bytes_get_data (bytes, &len);
+      gd = cw_geometry_data_new_from_data (p, len, "geometry.json", error);
+    }
+  return gd;
+}
+
+GSettings *
+cw_app_settings_new (void)
+{
+  static GSettingsSchema  *schema;
+  static GSettingsBackend *backend;
+  GSettingsSchemaSource   *source = g_settings_schema_source_get_default ();
+
+  if (schema == NULL && source != NULL)
+    schema = g_settings_schema_source_lookup (source, CW_APP_ID, TRUE);
+#ifdef CW_BUILD_SCHEMADIR
+  if (schema == NULL)
+    {
+      g_autoptr (GSettingsSchemaSource) build =
+        g_settings_schema_source_new_from_directory (CW_BUILD_SCHEMADIR, source, FALSE, NULL);
+
+      if (build != NULL)
+        schema = g_settings_schema_source_lookup (build, CW_APP_ID, FALSE);
+      /* Uninstalled: keep preferences for this run only, not in the user's dconf. */
+      if (schema != NULL && backend == NULL)
+        backend = g_memory_settings_backend_new ();
+    }
+#endif
+  if (schema == NULL)
+    g_error ("The settings schema %s is missing; install Chairwise or set GSETTINGS_SCHEMA_DIR", CW_APP_ID);
+  return g_settings_new_full (schema, backend, NULL);
 }

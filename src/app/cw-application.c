@@ -12,10 +12,10 @@ struct _CwApplication
 {
   GtkApplication parent_instance;
 
-  char *screenshot_path; /* --screenshot FILE */
-  gboolean demo;         /* --demo */
-  gint64 start_time;
-  gulong after_paint_id;
+  char          *screenshot_path; /* --screenshot FILE */
+  gboolean       demo;            /* --demo */
+  gint64         start_time;
+  gulong         after_paint_id;
   GdkFrameClock *clock;
 };
 
@@ -24,10 +24,9 @@ G_DEFINE_FINAL_TYPE (CwApplication, cw_application, GTK_TYPE_APPLICATION)
 static const GOptionEntry option_entries[] = {
   { "screenshot", 0, 0, G_OPTION_ARG_FILENAME, NULL,
     N_("Save a PNG of the window after its first frame, print the result and quit"), N_("FILE") },
-  { "demo", 0, 0, G_OPTION_ARG_NONE, NULL, N_("Open the demo document"), NULL },
-  { "version", 0, 0, G_OPTION_ARG_NONE, NULL, N_("Show the version and quit"), NULL },
-  { NULL }
-};
+    { "demo", 0, 0, G_OPTION_ARG_NONE, NULL, N_("Open the demo document"), NULL },
+      { "version", 0, 0, G_OPTION_ARG_NONE, NULL, N_("Show the version and quit"), NULL },
+        { NULL } };
 
 /* ---- screenshot mode ---------------------------------------------------------------- */
 
@@ -35,7 +34,7 @@ static long
 resident_kib (void)
 {
   g_autofree char *status = NULL;
-  const char *p;
+  const char      *p;
 
   if (!g_file_get_contents ("/proc/self/status", &status, NULL, NULL))
     return -1;
@@ -47,7 +46,7 @@ static gboolean
 take_screenshot_cb (gpointer user_data)
 {
   CwApplication *self = CW_APPLICATION (user_data);
-  GtkWindow *win = gtk_application_get_active_window (GTK_APPLICATION (self));
+  GtkWindow     *win = gtk_application_get_active_window (GTK_APPLICATION (self));
   g_autoptr (GError) error = NULL;
 
   if (win == NULL || !cw_window_save_screenshot (CW_WINDOW (win), self->screenshot_path, &error))
@@ -67,8 +66,8 @@ take_screenshot_cb (gpointer user_data)
 }
 
 static void
-after_paint_cb (GdkFrameClock  *clock,
-                CwApplication  *self)
+after_paint_cb (GdkFrameClock *clock,
+                CwApplication *self)
 {
   double ms = (g_get_monotonic_time () - self->start_time) / 1000.0;
 
@@ -141,8 +140,7 @@ offer_restore (CwWindow *win)
                                                          "%u documents had unsaved changes.",
                                                          files->len),
                                             files->len);
-  gtk_dialog_add_buttons (GTK_DIALOG (dialog), _("_Discard"), GTK_RESPONSE_REJECT, _("_Restore"),
-                          GTK_RESPONSE_ACCEPT, NULL);
+  gtk_dialog_add_buttons (GTK_DIALOG (dialog), _("_Discard"), GTK_RESPONSE_REJECT, _("_Restore"), GTK_RESPONSE_ACCEPT, NULL);
   gtk_dialog_set_default_response (GTK_DIALOG (dialog), GTK_RESPONSE_ACCEPT);
   g_object_set_data_full (G_OBJECT (dialog), "files", files, (GDestroyNotify) g_ptr_array_unref);
   g_signal_connect (dialog, "response", G_CALLBACK (restore_response_cb), win);
@@ -170,20 +168,13 @@ about_activated (GSimpleAction *action,
                  gpointer       user_data)
 {
   static const char *authors[] = { "The Chairwise developers", NULL };
-  GtkWindow *win = gtk_application_get_active_window (GTK_APPLICATION (user_data));
+  GtkWindow         *win = gtk_application_get_active_window (GTK_APPLICATION (user_data));
 
   gtk_show_about_dialog (win,
-                         "program-name", _("Chairwise"),
-                         "logo-icon-name", CW_APP_ID,
-                         "version", PACKAGE_VERSION,
-                         "comments", _("Which chair a substituted cyclohexane prefers, by how much, "
+                         "program-name", _("Chairwise"), "logo-icon-name", CW_APP_ID, "version", PACKAGE_VERSION, "comments", _("Which chair a substituted cyclohexane prefers, by how much, "
                                        "and at what temperature. The results are estimates from an "
                                        "additive model, to be confirmed by experiment."),
-                         "license-type", GTK_LICENSE_GPL_3_0,
-                         "authors", authors,
-                         "translator-credits", _("translator-credits"),
-                         "website", "https://chairwise.org",
-                         NULL);
+                                                                                                                                  "license-type", GTK_LICENSE_GPL_3_0, "authors", authors, "translator-credits", _("translator-credits"), "website", "https://chairwise.org", NULL);
 }
 
 static const GActionEntry app_entries[] = {
@@ -224,7 +215,8 @@ cw_application_startup (GApplication *app)
   static const char *close_accels[] = { "<Primary>w", NULL };
   static const char *custom_accels[] = { "<Primary>g", NULL };
   static const char *copy_accels[] = { "<Primary><Shift>c", NULL };
-  GtkApplication *gapp = GTK_APPLICATION (app);
+  static const char *help_accels[] = { "<Primary>question", NULL };
+  GtkApplication    *gapp = GTK_APPLICATION (app);
   g_autoptr (GtkCssProvider) css = gtk_css_provider_new ();
 
   G_APPLICATION_CLASS (cw_application_parent_class)->startup (app);
@@ -240,6 +232,7 @@ cw_application_startup (GApplication *app)
   gtk_application_set_accels_for_action (gapp, "window.close", close_accels);
   gtk_application_set_accels_for_action (gapp, "win.custom-group", custom_accels);
   gtk_application_set_accels_for_action (gapp, "win.copy-figure::chairs", copy_accels);
+  gtk_application_set_accels_for_action (gapp, "win.show-help-overlay", help_accels);
 
   gtk_css_provider_load_from_resource (css, "/org/chairwise/Chairwise/style.css");
   gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
@@ -272,8 +265,8 @@ static void
 cw_application_activate (GApplication *app)
 {
   CwApplication *self = CW_APPLICATION (app);
-  GtkWindow *active = gtk_application_get_active_window (GTK_APPLICATION (app));
-  CwWindow *win;
+  GtkWindow     *active = gtk_application_get_active_window (GTK_APPLICATION (app));
+  CwWindow      *win;
 
   if (active != NULL && !self->demo)
     {
@@ -327,7 +320,7 @@ cw_application_finalize (GObject *object)
 static void
 cw_application_class_init (CwApplicationClass *klass)
 {
-  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GObjectClass      *object_class = G_OBJECT_CLASS (klass);
   GApplicationClass *app_class = G_APPLICATION_CLASS (klass);
 
   object_class->finalize = cw_application_finalize;

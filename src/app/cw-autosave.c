@@ -67,7 +67,7 @@ static gint
 compare_mtime (gconstpointer a,
                gconstpointer b)
 {
-  GStatBuf sa, sb;
+  GStatBuf    sa, sb;
   const char *pa = *(const char *const *) a, *pb = *(const char *const *) b;
 
   if (g_stat (pa, &sa) != 0 || g_stat (pb, &sb) != 0)
@@ -80,7 +80,7 @@ cw_autosave_list (void)
 {
   g_autofree char *dir = cw_autosave_dir ();
   g_autoptr (GDir) d = g_dir_open (dir, 0, NULL);
-  GPtrArray *out = g_ptr_array_new_with_free_func (g_free);
+  GPtrArray  *out = g_ptr_array_new_with_free_func (g_free);
   const char *name;
 
   if (d == NULL)

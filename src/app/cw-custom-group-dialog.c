@@ -9,15 +9,15 @@ struct _CwCustomGroupDialog
   GtkWindow parent_instance;
 
   /* template children */
-  GtkEntry *name_entry;
+  GtkEntry      *name_entry;
   GtkSpinButton *a_spin;
   GtkSpinButton *sigma_spin;
-  GtkLabel *a_unit_label;
-  GtkLabel *sigma_unit_label;
-  GtkEntry *source_entry;
-  GtkDropDown *face_dropdown;
-  GtkLabel *position_label;
-  GtkLabel *error_label;
+  GtkLabel      *a_unit_label;
+  GtkLabel      *sigma_unit_label;
+  GtkEntry      *source_entry;
+  GtkDropDown   *face_dropdown;
+  GtkLabel      *position_label;
+  GtkLabel      *error_label;
 
   CwEnergyUnit unit;
 };
@@ -43,9 +43,9 @@ add_clicked_cb (CwCustomGroupDialog *self)
 {
   const char *name = gtk_editable_get_text (GTK_EDITABLE (self->name_entry));
   const char *source = gtk_editable_get_text (GTK_EDITABLE (self->source_entry));
-  double a, sigma;
-  int face = gtk_drop_down_get_selected (self->face_dropdown) == 1 ? CW_FACE_DOWN : CW_FACE_UP;
-  gboolean done = FALSE;
+  double      a, sigma;
+  int         face = gtk_drop_down_get_selected (self->face_dropdown) == 1 ? CW_FACE_DOWN : CW_FACE_UP;
+  gboolean    done = FALSE;
 
   gtk_spin_button_update (self->a_spin);
   gtk_spin_button_update (self->sigma_spin);
@@ -67,7 +67,7 @@ cw_custom_group_dialog_dispose (GObject *object)
 static void
 cw_custom_group_dialog_class_init (CwCustomGroupDialogClass *klass)
 {
-  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GObjectClass   *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->dispose = cw_custom_group_dialog_dispose;
@@ -105,7 +105,7 @@ cw_custom_group_dialog_new (GtkWindow   *parent,
 {
   CwCustomGroupDialog *self = g_object_new (CW_TYPE_CUSTOM_GROUP_DIALOG, "transient-for", parent,
                                             "destroy-with-parent", TRUE, NULL);
-  g_autofree char *where = NULL;
+  g_autofree char     *where = NULL;
 
   self->unit = unit;
   gtk_label_set_text (self->a_unit_label, cw_energy_unit_symbol (unit));

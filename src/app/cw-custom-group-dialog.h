@@ -13,9 +13,9 @@ G_DECLARE_FINAL_TYPE (CwCustomGroupDialog, cw_custom_group_dialog, CW, CUSTOM_GR
 /* Asks for a name, an A-value ± uncertainty (in the window's energy unit), a source and
  * a face. Emits "defined" (name, a_kcal, sigma_kcal, source, face) → gboolean; the
  * dialog closes when a handler returns TRUE and stays open (showing the error) otherwise. */
-CwCustomGroupDialog *cw_custom_group_dialog_new        (GtkWindow   *parent,
-                                                        CwEnergyUnit unit,
-                                                        int          position);
+CwCustomGroupDialog *cw_custom_group_dialog_new (GtkWindow   *parent,
+                                                 CwEnergyUnit unit,
+                                                 int          position);
 void                 cw_custom_group_dialog_show_error (CwCustomGroupDialog *self,
                                                         const char          *message);
 

@@ -11,15 +11,15 @@ struct _CwGroupChooser
   GtkWidget parent_instance;
 
   /* template children */
-  GtkMenuButton *button;
-  GtkLabel *button_label;
-  GtkPopover *popover;
+  GtkMenuButton  *button;
+  GtkLabel       *button_label;
+  GtkPopover     *popover;
   GtkSearchEntry *search_entry;
-  GtkListView *list_view;
+  GtkListView    *list_view;
 
   /* owned */
   GtkFilterListModel *filtered;
-  GtkStringFilter *filter;
+  GtkStringFilter    *filter;
   GtkSingleSelection *selection;
 
   CwEnergyUnit unit;
@@ -78,13 +78,13 @@ bind_row_cb (GtkSignalListItemFactory *factory,
              GtkListItem              *item,
              CwGroupChooser           *self)
 {
-  CwGroupItem *gi = gtk_list_item_get_item (item);
-  const CwGroup *g = cw_group_item_get_group (gi);
-  GtkWidget *box = gtk_list_item_get_child (item);
-  GtkWidget *top = gtk_widget_get_first_child (box);
-  GtkWidget *name = gtk_widget_get_first_child (top);
-  GtkWidget *value = gtk_widget_get_next_sibling (name);
-  GtkWidget *source = gtk_widget_get_next_sibling (top);
+  CwGroupItem     *gi = gtk_list_item_get_item (item);
+  const CwGroup   *g = cw_group_item_get_group (gi);
+  GtkWidget       *box = gtk_list_item_get_child (item);
+  GtkWidget       *top = gtk_widget_get_first_child (box);
+  GtkWidget       *name = gtk_widget_get_first_child (top);
+  GtkWidget       *value = gtk_widget_get_next_sibling (name);
+  GtkWidget       *source = gtk_widget_get_next_sibling (top);
   g_autofree char *value_text = cw_group_chooser_dup_value_text (g, self->unit);
   g_autofree char *source_text = NULL;
   g_autofree char *markup = NULL;
@@ -205,7 +205,7 @@ cw_group_chooser_grab_focus (GtkWidget *widget)
 static void
 cw_group_chooser_class_init (CwGroupChooserClass *klass)
 {
-  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GObjectClass   *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->dispose = cw_group_chooser_dispose;
@@ -289,7 +289,8 @@ cw_group_chooser_set_group (CwGroupChooser *self,
       gtk_widget_set_tooltip_text (GTK_WIDGET (self->button), _("No group: choose one"));
       return;
     }
-  value = cw_group_chooser_dup_value_text (group, self->unit);
+  value = g_strdup_printf (_("A %.2f %s"), cw_energy_from_kcal (group->a, self->unit),
+                              cw_energy_unit_symbol (self->unit));
   /* The plain label (Unicode subscripts): Pango 1.50 warns about <sub> in an ellipsized label. */
   escaped = g_markup_escape_text (group->label, -1);
   markup = g_strdup_printf ("<b>%s</b>  %s", escaped, value);

@@ -5,16 +5,16 @@
 typedef struct
 {
   CwDocument *doc;
-  guint serial;
+  guint       serial;
 } State;
 
 struct _CwHistory
 {
   GArray *undo; /* State, oldest first */
   GArray *redo;
-  guint limit;
-  char *last_key;
-  gint64 last_time;
+  guint   limit;
+  char   *last_key;
+  gint64  last_time;
 };
 
 static void
@@ -64,7 +64,7 @@ cw_history_push (CwHistory        *history,
                  const char       *merge_key)
 {
   gint64 now = g_get_monotonic_time ();
-  State s;
+  State  s;
 
   g_return_if_fail (history != NULL && doc != NULL);
 
@@ -106,7 +106,7 @@ swap (GArray           *from,
       guint             current_serial,
       guint            *serial_out)
 {
-  State *top, cur;
+  State      *top, cur;
   CwDocument *doc;
 
   if (from->len == 0)

@@ -11,7 +11,7 @@ struct _CwRingCanvas
 
   /* owned: a copy, so the canvas never points into a document that changed */
   CwMolecule *mol;
-  int selected;
+  int         selected;
 };
 
 G_DEFINE_FINAL_TYPE (CwRingCanvas, cw_ring_canvas, GTK_TYPE_WIDGET)
@@ -32,7 +32,7 @@ enum
 };
 
 static GParamSpec *properties[N_PROPS];
-static guint signals[N_SIGNALS];
+static guint       signals[N_SIGNALS];
 
 typedef struct
 {
@@ -71,12 +71,12 @@ get_colors (GtkWidget *widget,
 {
   GtkStyleContext *ctx = gtk_widget_get_style_context (widget);
 
-G_GNUC_BEGIN_IGNORE_DEPRECATIONS
+  G_GNUC_BEGIN_IGNORE_DEPRECATIONS
   gtk_style_context_get_color (ctx, fg);
   if (!gtk_style_context_lookup_color (ctx, "accent_bg_color", accent) &&
       !gtk_style_context_lookup_color (ctx, "theme_selected_bg_color", accent))
     gdk_rgba_parse (accent, "#3584e4");
-G_GNUC_END_IGNORE_DEPRECATIONS
+  G_GNUC_END_IGNORE_DEPRECATIONS
 }
 
 static void
@@ -122,7 +122,7 @@ draw_label (GtkWidget  *widget,
             gboolean    bold)
 {
   PangoLayout *layout = gtk_widget_create_pango_layout (widget, NULL);
-  int w, h;
+  int          w, h;
 
   if (bold)
     {
@@ -145,14 +145,14 @@ draw_substituents (CwRingCanvas   *self,
 {
   const CwSubstituent *up = cw_molecule_get (self->mol, position, CW_FACE_UP);
   const CwSubstituent *down = cw_molecule_get (self->mol, position, CW_FACE_DOWN);
-  double base = -G_PI / 2.0 + (position - 1) * G_PI / 3.0;
-  double x0, y0;
+  double               base = -G_PI / 2.0 + (position - 1) * G_PI / 3.0;
+  double               x0, y0;
 
   carbon_point (g, position, &x0, &y0);
   for (int f = 0; f < 2; f++)
     {
       const CwSubstituent *s = f == 0 ? up : down;
-      double a = base, x1, y1, lx, ly;
+      double               a = base, x1, y1, lx, ly;
 
       if (s == NULL)
         continue;
@@ -173,10 +173,10 @@ cw_ring_canvas_snapshot (GtkWidget   *widget,
                          GtkSnapshot *snapshot)
 {
   CwRingCanvas *self = CW_RING_CANVAS (widget);
-  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
-  GdkRGBA fg, accent;
-  Geometry g;
-  cairo_t *cr;
+  int           w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  GdkRGBA       fg, accent;
+  Geometry      g;
+  cairo_t      *cr;
 
   if (w <= 0 || h <= 0)
     return;
@@ -213,7 +213,7 @@ cw_ring_canvas_snapshot (GtkWidget   *widget,
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
       double x, y, a = -G_PI / 2.0 + (p - 1) * G_PI / 3.0;
-      char num[4];
+      char   num[4];
 
       carbon_point (&g, p, &x, &y);
       g_snprintf (num, sizeof num, "%d", p);
@@ -232,7 +232,7 @@ static void
 update_accessible (CwRingCanvas *self)
 {
   const CwSubstituent *up, *down;
-  g_autofree char *text = NULL;
+  g_autofree char     *text = NULL;
 
   if (self->mol == NULL || self->selected < 1)
     return;
@@ -240,7 +240,7 @@ update_accessible (CwRingCanvas *self)
   down = cw_molecule_get (self->mol, self->selected, CW_FACE_DOWN);
   /* TRANSLATORS: screen-reader text for the ring canvas: carbon number, up group, down group */
   text = g_strdup_printf (_("Carbon %d selected; up face: %s; down face: %s"), self->selected,
-                          up ? up->group->label : _("none"), down ? down->group->label : _("none"));
+                             up ? up->group->label : _("none"), down ? down->group->label : _("none"));
   gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_VALUE_TEXT, text, -1);
 }
 
@@ -268,7 +268,7 @@ key_pressed_cb (GtkEventControllerKey *controller,
                 CwRingCanvas          *self)
 {
   gunichar ch = gdk_keyval_to_unicode (keyval);
-  int sel = MAX (self->selected, 1);
+  int      sel = MAX (self->selected, 1);
 
   if (state & (GDK_CONTROL_MASK | GDK_ALT_MASK | GDK_SUPER_MASK))
     return FALSE;
@@ -344,13 +344,13 @@ cw_ring_canvas_set_property (GObject      *object,
 }
 
 static void
-cw_ring_canvas_measure (GtkWidget      *widget,
-                        GtkOrientation  orientation,
-                        int             for_size,
-                        int            *minimum,
-                        int            *natural,
-                        int            *minimum_baseline,
-                        int            *natural_baseline)
+cw_ring_canvas_measure (GtkWidget     *widget,
+                        GtkOrientation orientation,
+                        int            for_size,
+                        int           *minimum,
+                        int           *natural,
+                        int           *minimum_baseline,
+                        int           *natural_baseline)
 {
   *minimum = 220;
   *natural = 320;
@@ -359,7 +359,7 @@ cw_ring_canvas_measure (GtkWidget      *widget,
 static void
 cw_ring_canvas_class_init (CwRingCanvasClass *klass)
 {
-  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GObjectClass   *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->finalize = cw_ring_canvas_finalize;
@@ -383,6 +383,10 @@ cw_ring_canvas_class_init (CwRingCanvasClass *klass)
     g_signal_new ("search-requested", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST, 0, NULL, NULL,
                   NULL, G_TYPE_NONE, 1, G_TYPE_STRING);
 
+  /* Copy and paste the molecule as SMILES while the ring has the focus. */
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_c, GDK_CONTROL_MASK, "win.copy-smiles", NULL);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_v, GDK_CONTROL_MASK, "win.paste-smiles", NULL);
+
   gtk_widget_class_set_css_name (widget_class, "ringcanvas");
   gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_GROUP);
 }
@@ -390,7 +394,7 @@ cw_ring_canvas_class_init (CwRingCanvasClass *klass)
 static void
 cw_ring_canvas_init (CwRingCanvas *self)
 {
-  GtkGesture *click = gtk_gesture_click_new ();
+  GtkGesture         *click = gtk_gesture_click_new ();
   GtkEventController *keys = gtk_event_controller_key_new ();
 
   self->selected = 1;
@@ -451,8 +455,8 @@ cw_ring_canvas_hit_test (CwRingCanvas *self,
                          double        y)
 {
   Geometry g;
-  int best = 0;
-  double best_d = G_MAXDOUBLE;
+  int      best = 0;
+  double   best_d = G_MAXDOUBLE;
 
   g_return_val_if_fail (CW_IS_RING_CANVAS (self), 0);
 

@@ -11,7 +11,7 @@ lookup_group (CwWindow   *self,
               const char *id)
 {
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  const CwGroup *g = cw_molecule_find_custom_group (mol, id);
+  const CwGroup    *g = cw_molecule_find_custom_group (mol, id);
 
   return g != NULL ? g : cw_group_table_lookup (self->data->groups, id);
 }
@@ -60,7 +60,7 @@ cw_window_remove_group (CwWindow *self,
 static char *
 custom_id_for (const char *name)
 {
-  GString *id = g_string_new ("custom-");
+  GString         *id = g_string_new ("custom-");
   g_autofree char *norm = g_utf8_normalize (name, -1, G_NORMALIZE_DEFAULT);
 
   for (const char *p = norm; p && *p; p = g_utf8_next_char (p))
@@ -88,7 +88,7 @@ cw_window_place_custom_group (CwWindow   *self,
   g_autofree char *stripped = g_strstrip (g_strdup (name ? name : ""));
   g_autofree char *id = NULL;
   g_autoptr (CwDocument) before = NULL;
-  CwMolecule *mol;
+  CwMolecule    *mol;
   const CwGroup *g;
 
   if (*stripped == '\0')
@@ -165,7 +165,7 @@ apply_history (CwWindow   *self,
 void
 cw_window_undo (CwWindow *self)
 {
-  guint serial = 0;
+  guint       serial = 0;
   CwDocument *doc = cw_history_undo (self->history, self->doc, self->serial, &serial);
 
   apply_history (self, doc, serial);
@@ -174,7 +174,7 @@ cw_window_undo (CwWindow *self)
 void
 cw_window_redo (CwWindow *self)
 {
-  guint serial = 0;
+  guint       serial = 0;
   CwDocument *doc = cw_history_redo (self->history, self->doc, self->serial, &serial);
 
   apply_history (self, doc, serial);
@@ -208,8 +208,8 @@ set_group_action (GtkWidget  *widget,
   CwWindow *self = CW_WINDOW (widget);
   g_autoptr (GError) error = NULL;
   const char *face_s, *id;
-  int pos;
-  CwFace face;
+  int         pos;
+  CwFace      face;
 
   g_variant_get (param, "(i&s&s)", &pos, &face_s, &id);
   if (!parse_face (self, face_s, &face))
@@ -223,10 +223,10 @@ remove_group_action (GtkWidget  *widget,
                      const char *action_name,
                      GVariant   *param)
 {
-  CwWindow *self = CW_WINDOW (widget);
+  CwWindow   *self = CW_WINDOW (widget);
   const char *face_s;
-  int pos;
-  CwFace face;
+  int         pos;
+  CwFace      face;
 
   g_variant_get (param, "(i&s)", &pos, &face_s);
   if (parse_face (self, face_s, &face))
@@ -238,8 +238,8 @@ clear_carbon_action (GtkWidget  *widget,
                      const char *action_name,
                      GVariant   *param)
 {
-  CwWindow *self = CW_WINDOW (widget);
-  int pos = g_variant_get_int32 (param);
+  CwWindow   *self = CW_WINDOW (widget);
+  int         pos = g_variant_get_int32 (param);
   CwMolecule *mol = cw_document_get_molecule (self->doc);
 
   if (cw_molecule_get (mol, pos, CW_FACE_UP) == NULL && cw_molecule_get (mol, pos, CW_FACE_DOWN) == NULL)
@@ -292,9 +292,9 @@ place_custom_group_action (GtkWidget  *widget,
   CwWindow *self = CW_WINDOW (widget);
   g_autoptr (GError) error = NULL;
   const char *name, *source, *face_s;
-  double a, sigma;
-  int pos;
-  CwFace face;
+  double      a, sigma;
+  int         pos;
+  CwFace      face;
 
   g_variant_get (param, "(&sdd&si&s)", &name, &a, &sigma, &source, &pos, &face_s);
   if (!parse_face (self, face_s, &face))
@@ -328,7 +328,7 @@ custom_group_action (GtkWidget  *widget,
                      const char *action_name,
                      GVariant   *param)
 {
-  CwWindow *self = CW_WINDOW (widget);
+  CwWindow            *self = CW_WINDOW (widget);
   CwCustomGroupDialog *dialog = cw_custom_group_dialog_new (GTK_WINDOW (self), cw_window_get_energy_unit (self),
                                                             cw_ring_canvas_get_selected (self->ring_canvas));
 

@@ -11,8 +11,8 @@
 static const struct
 {
   const char *name;
-  CwFigure fig;
-  int width, height;
+  CwFigure    fig;
+  int         width, height;
 } figures[] = {
   { "structure", CW_FIGURE_STRUCTURE, 420, 420 },
   { "chairs", CW_FIGURE_CHAIRS, 900, 420 },
@@ -42,9 +42,9 @@ cw_window_export_to (CwWindow   *self,
                      GError    **error)
 {
   g_autofree char *fig_name = g_strdup (target);
-  char *dot = strrchr (fig_name, '.');
-  CwRenderOptions opt;
-  guint i;
+  char            *dot = strrchr (fig_name, '.');
+  CwRenderOptions  opt;
+  guint            i;
 
   if (dot != NULL)
     *dot = '\0';
@@ -96,10 +96,10 @@ cw_window_copy_figure (CwWindow   *self,
   g_autoptr (GdkTexture) texture = NULL;
   GdkContentProvider *providers[2];
   GdkContentProvider *union_provider;
-  cairo_surface_t *surface;
-  cairo_status_t status;
-  cairo_t *cr;
-  guint i;
+  cairo_surface_t    *surface;
+  cairo_status_t      status;
+  cairo_t            *cr;
+  guint               i;
 
   if (!lookup_figure (figure, &i) || (!self->an_valid && figures[i].fig != CW_FIGURE_STRUCTURE))
     {
@@ -130,8 +130,7 @@ cw_window_copy_figure (CwWindow   *self,
   svg_bytes = g_byte_array_free_to_bytes (svg);
   if (status != CAIRO_STATUS_SUCCESS)
     {
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The figure could not be drawn: %s"),
-                   cairo_status_to_string (status));
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The figure could not be drawn: %s"), cairo_status_to_string (status));
       return FALSE;
     }
   texture = gdk_texture_new_from_bytes (png_bytes, error);
@@ -150,7 +149,7 @@ cw_window_copy_figure (CwWindow   *self,
 typedef struct
 {
   CwWindow *self;
-  char *target;
+  char     *target;
 } ExportRequest;
 
 static void
@@ -178,15 +177,15 @@ export_action (GtkWidget  *widget,
                const char *action_name,
                GVariant   *param)
 {
-  CwWindow *self = CW_WINDOW (widget);
-  const char *target = g_variant_get_string (param, NULL);
-  const char *title = cw_document_get_title (self->doc);
+  CwWindow             *self = CW_WINDOW (widget);
+  const char           *target = g_variant_get_string (param, NULL);
+  const char           *title = cw_document_get_title (self->doc);
   GtkFileChooserNative *native;
-  ExportRequest *req;
-  g_autofree char *name = NULL;
+  ExportRequest        *req;
+  g_autofree char      *name = NULL;
 
   native = gtk_file_chooser_native_new (_("Export"), GTK_WINDOW (self), GTK_FILE_CHOOSER_ACTION_SAVE,
-                                        _("_Export"), _("_Cancel"));
+                                           _("_Export"), _("_Cancel"));
   /* e.g. "Demo-chairs.svg" */
   name = g_strdup_printf ("%s-%s", title && *title ? title : _("Untitled"), target);
   g_strdelimit (name, "/", '-');

@@ -120,7 +120,7 @@ cw_window_open_file (CwWindow *self,
                      GError  **error)
 {
   g_autofree char *path = g_file_get_path (file);
-  CwDocument *doc;
+  CwDocument      *doc;
 
   if (path == NULL)
     {
@@ -170,7 +170,7 @@ open_in_some_window (CwWindow *self,
                      GFile    *file)
 {
   GtkApplication *app = gtk_window_get_application (GTK_WINDOW (self));
-  CwWindow *target = self;
+  CwWindow       *target = self;
   g_autoptr (GError) error = NULL;
 
   if (!cw_window_is_pristine (self) && app != NULL)
@@ -219,7 +219,7 @@ open_action (GtkWidget  *widget,
              GVariant   *param)
 {
   GtkFileChooserNative *native = gtk_file_chooser_native_new (_("Open Document"), GTK_WINDOW (widget),
-                                                              GTK_FILE_CHOOSER_ACTION_OPEN, _("_Open"), _("_Cancel"));
+                                                                 GTK_FILE_CHOOSER_ACTION_OPEN, _("_Open"), _("_Cancel"));
   g_autoptr (GtkFileFilter) filter = json_filter ();
 
   gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (native), filter);
@@ -282,9 +282,9 @@ static void
 save_as (CwWindow *self)
 {
   GtkFileChooserNative *native = gtk_file_chooser_native_new (_("Save Document"), GTK_WINDOW (self),
-                                                              GTK_FILE_CHOOSER_ACTION_SAVE, _("_Save"), _("_Cancel"));
+                                                                 GTK_FILE_CHOOSER_ACTION_SAVE, _("_Save"), _("_Cancel"));
   g_autoptr (GtkFileFilter) filter = json_filter ();
-  const char *title = cw_document_get_title (self->doc);
+  const char      *title = cw_document_get_title (self->doc);
   g_autofree char *name = g_strconcat (title && *title ? title : _("Untitled"), ".json", NULL);
 
   gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (native), filter);
@@ -333,7 +333,7 @@ save_to_action (GtkWidget  *widget,
 typedef struct
 {
   CwWindow *self;
-  int response;
+  int       response;
 } CloseAnswer;
 
 /* Runs after the dialog has gone: closing the window inside the dialog's own
@@ -342,7 +342,7 @@ static gboolean
 apply_close_answer_cb (gpointer data)
 {
   CloseAnswer *answer = data;
-  CwWindow *self = answer->self;
+  CwWindow    *self = answer->self;
 
   switch (answer->response)
     {
@@ -381,8 +381,8 @@ unsaved_response_cb (GtkDialog *dialog,
 gboolean
 cw_window_close_request (CwWindow *self)
 {
-  GtkWidget *dialog;
-  const char *title;
+  GtkWidget       *dialog;
+  const char      *title;
   g_autofree char *primary = NULL;
 
   if (self->close_confirmed || !cw_window_get_modified (self))
@@ -403,8 +403,7 @@ cw_window_close_request (CwWindow *self)
                                    GTK_MESSAGE_QUESTION, GTK_BUTTONS_NONE, "%s", primary);
   gtk_message_dialog_format_secondary_text (GTK_MESSAGE_DIALOG (dialog), "%s",
                                             _("If you close without saving, your changes are lost."));
-  gtk_dialog_add_buttons (GTK_DIALOG (dialog), _("_Cancel"), GTK_RESPONSE_CANCEL, _("_Discard"),
-                          GTK_RESPONSE_REJECT, _("_Save"), GTK_RESPONSE_ACCEPT, NULL);
+  gtk_dialog_add_buttons (GTK_DIALOG (dialog), _("_Cancel"), GTK_RESPONSE_CANCEL, _("_Discard"), GTK_RESPONSE_REJECT, _("_Save"), GTK_RESPONSE_ACCEPT, NULL);
   gtk_dialog_set_default_response (GTK_DIALOG (dialog), GTK_RESPONSE_ACCEPT);
   g_signal_connect_object (dialog, "response", G_CALLBACK (unsaved_response_cb), self, 0);
   self->pending_dialog = dialog;
@@ -421,7 +420,7 @@ drop_cb (GtkDropTarget *target,
          double         y,
          CwWindow      *self)
 {
-  GSList *files;
+  GSList  *files;
   gboolean any;
 
   if (!G_VALUE_HOLDS (value, GDK_TYPE_FILE_LIST))

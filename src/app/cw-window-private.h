@@ -1,11 +1,12 @@
 #pragma once
 
-#include "cw-window.h"
-
+#include "cw-couplings.h"
 #include "cw-group-chooser.h"
 #include "cw-history.h"
-#include "cw-ring-canvas.h"
+#include "cw-reactivity.h"
 #include "cw-render.h"
+#include "cw-ring-canvas.h"
+#include "cw-window.h"
 
 G_BEGIN_DECLS
 
@@ -14,116 +15,146 @@ struct _CwWindow
   GtkApplicationWindow parent_instance;
 
   /* template children */
-  GtkLabel *title_label;
-  GtkLabel *subtitle_label;
-  GtkMenuButton *temperature_button;
-  GtkSpinButton *temperature_spin;
-  GtkAdjustment *temperature_adjustment;
-  GtkLabel *temperature_error_label;
-  GtkDropDown *energy_unit_dropdown;
-  CwRingCanvas *ring_canvas;
-  GtkLabel *carbon_label;
+  GtkLabel       *title_label;
+  GtkLabel       *subtitle_label;
+  GtkMenuButton  *temperature_button;
+  GtkSpinButton  *temperature_spin;
+  GtkAdjustment  *temperature_adjustment;
+  GtkLabel       *temperature_error_label;
+  GtkDropDown    *energy_unit_dropdown;
+  CwRingCanvas   *ring_canvas;
+  GtkLabel       *carbon_label;
   CwGroupChooser *up_chooser;
   CwGroupChooser *down_chooser;
-  GtkButton *up_clear;
-  GtkButton *down_clear;
+  GtkButton      *up_clear;
+  GtkButton      *down_clear;
   GtkDrawingArea *chairs_area;
   GtkDrawingArea *profile_area;
   GtkDrawingArea *scan_area;
-  GtkLabel *pop1_label;
-  GtkLabel *pop2_label;
-  GtkLabel *summary_label;
-  GtkBox *flags_box;
-  GtkGrid *terms_grid;
-  GtkStack *lower_stack;
-  GtkLabel *caution_label;
-  GMenu *recent_section;
+  GtkLabel       *pop1_label;
+  GtkLabel       *pop2_label;
+  GtkLabel       *summary_label;
+  GtkBox         *flags_box;
+  GtkGrid        *terms_grid;
+  GtkStack       *lower_stack;
+  GtkLabel       *caution_label;
+  GMenu          *recent_section;
+  GtkEntry       *smiles_entry;
+  GtkLabel       *smiles_note_label;
+  GtkGrid        *couplings_grid;
+  GtkLabel       *couplings_note;
+  GtkGrid        *reactions_grid;
+  GtkLabel       *reactions_note;
+  GtkGrid        *isomers_grid;
+  GtkLabel       *isomers_note;
 
   /* owned */
-  CwDocument *doc;
-  GFile *file;
-  CwHistory *history;
-  GSettings *settings;
-  GListStore *groups_store;
-  GtkWidget *pending_dialog; /* the unsaved-changes or restore dialog, when shown */
-  char *autosave_path;
-  char *analysis_error;
+  CwDocument   *doc;
+  GFile        *file;
+  CwHistory    *history;
+  GSettings    *settings;
+  GListStore   *groups_store;
+  GtkWidget    *pending_dialog; /* the unsaved-changes or restore dialog, when shown */
+  char         *autosave_path;
+  char         *analysis_error;
+  CwCouplings  *couplings; /* 11 kB: kept on the heap, reused */
+  CwReactivity *reactivity;
+
+  /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
+   * what an edit would otherwise spend most of its time on) */
+  GPtrArray *term_cells; /* GtkLabel*, 4 per grid row, row 0 the header */
+  GPtrArray *flag_rows;  /* GtkBox* holding a GtkImage and a GtkLabel */
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */
-  CwAnalysis an;
-  gboolean an_valid;
-  guint serial;
-  guint saved_serial;
-  guint next_serial;
-  guint autosave_id;
-  guint n_custom_shown; /* custom groups in groups_store */
-  gboolean updating_temperature;
-  gboolean close_confirmed;
-  gboolean close_after_save;
+  CwAnalysis    an;
+  gboolean      an_valid;
+  guint         serial;
+  guint         saved_serial;
+  guint         next_serial;
+  guint         autosave_id;
+  guint         n_custom_shown; /* custom groups in groups_store */
+  gboolean      updating_temperature;
+  gboolean      close_confirmed;
+  gboolean      close_after_save;
+  gboolean      pages_stale; /* the hidden lower pages need recomputing when shown */
 };
 
 /* cw-window.c */
-void      cw_window_begin_edit      (CwWindow   *self,
-                                     const char *merge_key);
-void      cw_window_end_edit        (CwWindow *self);
-void      cw_window_refresh         (CwWindow *self);
-void      cw_window_update_title    (CwWindow *self);
-void      cw_window_show_error      (CwWindow   *self,
-                                     const char *primary,
-                                     const GError *error);
-CwEnergyUnit      cw_window_get_energy_unit      (CwWindow *self);
+void              cw_window_begin_edit (CwWindow   *self,
+                                        const char *merge_key);
+void              cw_window_end_edit (CwWindow *self);
+void              cw_window_refresh (CwWindow *self);
+void              cw_window_update_title (CwWindow *self);
+void              cw_window_show_error (CwWindow     *self,
+                                        const char   *primary,
+                                        const GError *error);
+CwEnergyUnit      cw_window_get_energy_unit (CwWindow *self);
 CwTemperatureUnit cw_window_get_temperature_unit (CwWindow *self);
-void      cw_window_render_options  (CwWindow        *self,
-                                     GtkWidget       *widget,
-                                     CwRenderOptions *opt);
+void              cw_window_render_options (CwWindow        *self,
+                                            GtkWidget       *widget,
+                                            CwRenderOptions *opt);
+
+/* cw-window-pages.c: the Couplings, Reactions and Isomers pages, computed only when shown. */
+void cw_window_update_pages (CwWindow *self);
+void cw_window_grid_set_rows (GtkGrid     *grid,
+                              guint        n_columns,
+                              const char **cells,
+                              guint        n_rows);
+
+/* cw-window-smiles.c: the SMILES entry, copy and paste. */
+void     cw_window_class_add_smiles_actions (GtkWidgetClass *widget_class);
+void     cw_window_update_smiles (CwWindow *self);
+gboolean cw_window_set_smiles (CwWindow   *self,
+                               const char *smiles,
+                               GError    **error);
 
 /* cw-window-results.c: the labels, terms table and flags for the current analysis. */
-void      cw_window_update_results  (CwWindow *self);
+void cw_window_update_results (CwWindow *self);
 
 /* cw-window-edit.c: ring edits, temperature, custom groups, undo and redo. */
-void      cw_window_class_add_edit_actions (GtkWidgetClass *widget_class);
-gboolean  cw_window_set_group       (CwWindow   *self,
-                                     int         position,
-                                     CwFace      face,
-                                     const char *group_id,
-                                     GError    **error);
-gboolean  cw_window_remove_group    (CwWindow *self,
-                                     int       position,
-                                     CwFace    face);
-gboolean  cw_window_place_custom_group (CwWindow   *self,
-                                        const char *name,
-                                        double      a_kcal,
-                                        double      sigma_kcal,
-                                        const char *source,
-                                        int         position,
-                                        CwFace      face,
-                                        GError    **error);
-void      cw_window_set_temperature (CwWindow *self,
-                                     double    kelvin);
-void      cw_window_undo            (CwWindow *self);
-void      cw_window_redo            (CwWindow *self);
-void      cw_window_update_edit_actions (CwWindow *self);
+void     cw_window_class_add_edit_actions (GtkWidgetClass *widget_class);
+gboolean cw_window_set_group (CwWindow   *self,
+                              int         position,
+                              CwFace      face,
+                              const char *group_id,
+                              GError    **error);
+gboolean cw_window_remove_group (CwWindow *self,
+                                 int       position,
+                                 CwFace    face);
+gboolean cw_window_place_custom_group (CwWindow   *self,
+                                       const char *name,
+                                       double      a_kcal,
+                                       double      sigma_kcal,
+                                       const char *source,
+                                       int         position,
+                                       CwFace      face,
+                                       GError    **error);
+void     cw_window_set_temperature (CwWindow *self,
+                                    double    kelvin);
+void     cw_window_undo (CwWindow *self);
+void     cw_window_redo (CwWindow *self);
+void     cw_window_update_edit_actions (CwWindow *self);
 
 /* cw-window-file.c: open, save, recent documents, close, drag and drop, autosave. */
-void      cw_window_class_add_file_actions (GtkWidgetClass *widget_class);
-void      cw_window_file_init       (CwWindow *self);
-gboolean  cw_window_save_to         (CwWindow   *self,
-                                     GFile      *file,
-                                     GError    **error);
-void      cw_window_schedule_autosave (CwWindow *self);
-void      cw_window_drop_autosave   (CwWindow *self);
-void      cw_window_update_recent_menu (CwWindow *self);
-gboolean  cw_window_close_request   (CwWindow *self);
+void     cw_window_class_add_file_actions (GtkWidgetClass *widget_class);
+void     cw_window_file_init (CwWindow *self);
+gboolean cw_window_save_to (CwWindow *self,
+                            GFile    *file,
+                            GError  **error);
+void     cw_window_schedule_autosave (CwWindow *self);
+void     cw_window_drop_autosave (CwWindow *self);
+void     cw_window_update_recent_menu (CwWindow *self);
+gboolean cw_window_close_request (CwWindow *self);
 
 /* cw-window-export.c: figures, report and clipboard. */
-void      cw_window_class_add_export_actions (GtkWidgetClass *widget_class);
-gboolean  cw_window_export_to       (CwWindow   *self,
-                                     const char *target,
-                                     const char *path,
-                                     GError    **error);
-gboolean  cw_window_copy_figure     (CwWindow   *self,
-                                     const char *figure,
-                                     GError    **error);
+void     cw_window_class_add_export_actions (GtkWidgetClass *widget_class);
+gboolean cw_window_export_to (CwWindow   *self,
+                              const char *target,
+                              const char *path,
+                              GError    **error);
+gboolean cw_window_copy_figure (CwWindow   *self,
+                                const char *figure,
+                                GError    **error);
 
 G_END_DECLS

@@ -5,6 +5,8 @@
 
 #include "cw-window-private.h"
 
+#define N_COLUMNS 4
+
 /* Flags that explain rather than warn. */
 static gboolean
 flag_is_info (CwFlagCode code)
@@ -31,57 +33,116 @@ flag_is_info (CwFlagCode code)
 }
 
 static void
-clear_children (GtkWidget *parent)
+set_css_class (GtkWidget  *widget,
+               const char *css,
+               gboolean    on)
 {
-  GtkWidget *child;
+  if (on)
+    gtk_widget_add_css_class (widget, css);
+  else
+    gtk_widget_remove_css_class (widget, css);
+}
 
-  while ((child = gtk_widget_get_first_child (parent)) != NULL)
-    gtk_widget_unparent (child);
+/* ---- flags ------------------------------------------------------------------------- */
+
+static GtkWidget *
+flag_row (CwWindow *self,
+          guint     i)
+{
+  GtkWidget *row, *icon, *label;
+
+  if (i < self->flag_rows->len)
+    return g_ptr_array_index (self->flag_rows, i);
+  row = gtk_box_new (GTK_ORIENTATION_HORIZONTAL, 8);
+  icon = gtk_image_new ();
+  label = gtk_label_new (NULL);
+  gtk_widget_add_css_class (row, "cw-flag");
+  gtk_widget_set_valign (icon, GTK_ALIGN_START);
+  gtk_label_set_wrap (GTK_LABEL (label), TRUE);
+  gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
+  gtk_label_set_selectable (GTK_LABEL (label), TRUE);
+  gtk_widget_set_hexpand (label, TRUE);
+  gtk_box_append (GTK_BOX (row), icon);
+  gtk_box_append (GTK_BOX (row), label);
+  gtk_box_append (self->flags_box, row);
+  g_ptr_array_add (self->flag_rows, row);
+  return row;
 }
 
 static void
 update_flags (CwWindow *self)
 {
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  CwEnergyUnit unit = cw_window_get_energy_unit (self);
+  CwEnergyUnit      unit = cw_window_get_energy_unit (self);
+  int               n = self->an_valid ? self->an.n_flags : 0;
 
-  clear_children (GTK_WIDGET (self->flags_box));
-  for (int i = 0; self->an_valid && i < self->an.n_flags; i++)
+  for (int i = 0; i < n; i++)
     {
-      gboolean info = flag_is_info (self->an.flags[i].code);
+      gboolean         info = flag_is_info (self->an.flags[i].code);
       g_autofree char *msg = cw_flag_dup_message (&self->an.flags[i], mol, unit);
-      GtkWidget *row = gtk_box_new (GTK_ORIENTATION_HORIZONTAL, 8);
-      GtkWidget *icon = gtk_image_new_from_icon_name (info ? "dialog-information-symbolic" : "dialog-warning-symbolic");
-      GtkWidget *label = gtk_label_new (msg);
+      GtkWidget       *row = flag_row (self, i);
+      GtkWidget       *icon = gtk_widget_get_first_child (row);
+      GtkWidget       *label = gtk_widget_get_next_sibling (icon);
 
-      gtk_widget_add_css_class (row, "cw-flag");
-      if (info)
-        gtk_widget_add_css_class (row, "cw-info");
-      gtk_widget_set_valign (icon, GTK_ALIGN_START);
+      set_css_class (row, "cw-info", info);
+      gtk_image_set_from_icon_name (GTK_IMAGE (icon), info ? "dialog-information-symbolic" : "dialog-warning-symbolic");
       gtk_accessible_update_property (GTK_ACCESSIBLE (icon), GTK_ACCESSIBLE_PROPERTY_LABEL,
                                       info ? _("Note") : _("Warning"), -1);
-      gtk_label_set_wrap (GTK_LABEL (label), TRUE);
-      gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
-      gtk_label_set_selectable (GTK_LABEL (label), TRUE);
-      gtk_widget_set_hexpand (label, TRUE);
-      gtk_box_append (GTK_BOX (row), icon);
-      gtk_box_append (GTK_BOX (row), label);
-      gtk_box_append (self->flags_box, row);
+      gtk_label_set_text (GTK_LABEL (label), msg);
+      gtk_widget_set_visible (row, TRUE);
     }
-  gtk_widget_set_visible (GTK_WIDGET (self->flags_box), gtk_widget_get_first_child (GTK_WIDGET (self->flags_box)) != NULL);
+  for (guint i = n; i < self->flag_rows->len; i++)
+    gtk_widget_set_visible (g_ptr_array_index (self->flag_rows, i), FALSE);
+  gtk_widget_set_visible (GTK_WIDGET (self->flags_box), n > 0);
 }
 
-static GtkWidget *
-cell (const char *text,
-      const char *css,
-      float       xalign)
-{
-  GtkWidget *label = gtk_label_new (text);
+/* ---- terms table -------------------------------------------------------------------- */
 
-  gtk_label_set_xalign (GTK_LABEL (label), xalign);
-  if (css != NULL)
-    gtk_widget_add_css_class (label, css);
-  return label;
+static GtkLabel *
+term_cell (CwWindow *self,
+           guint     row,
+           guint     col)
+{
+  while (self->term_cells->len < (row + 1) * N_COLUMNS)
+    {
+      guint      r = self->term_cells->len / N_COLUMNS, c = self->term_cells->len % N_COLUMNS;
+      GtkWidget *label = gtk_label_new (NULL);
+
+      gtk_label_set_xalign (GTK_LABEL (label), c == 1 || c == 2 ? 1.0f : 0.0f);
+      if (c == 1 || c == 2)
+        gtk_widget_add_css_class (label, "cw-terms-value");
+      if (c == 3)
+        {
+          gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
+          gtk_label_set_max_width_chars (GTK_LABEL (label), 48);
+          gtk_widget_set_hexpand (label, TRUE);
+          gtk_widget_add_css_class (label, "dim-label");
+        }
+      gtk_grid_attach (self->terms_grid, label, c, r, 1, 1);
+      g_ptr_array_add (self->term_cells, label);
+    }
+  return g_ptr_array_index (self->term_cells, row * N_COLUMNS + col);
+}
+
+static void
+set_row (CwWindow   *self,
+         guint       row,
+         const char *texts[N_COLUMNS],
+         gboolean    heading)
+{
+  for (guint c = 0; c < N_COLUMNS; c++)
+    {
+      GtkLabel *label = term_cell (self, row, c);
+
+      gtk_label_set_text (label, texts[c] ? texts[c] : "");
+      set_css_class (GTK_WIDGET (label), "cw-terms-header", heading);
+      if (c == 3)
+        {
+          set_css_class (GTK_WIDGET (label), "dim-label", !heading);
+          gtk_widget_set_tooltip_text (GTK_WIDGET (label), heading ? NULL : texts[c]);
+        }
+      gtk_widget_set_visible (GTK_WIDGET (label), TRUE);
+    }
 }
 
 static const CwTerm *
@@ -99,77 +160,67 @@ find_term (const CwChair *chair,
 }
 
 static void
-add_term_row (CwWindow     *self,
-              int           row,
-              const CwTerm *t1,
-              const CwTerm *t2)
+term_row (CwWindow     *self,
+          guint         row,
+          const CwTerm *t1,
+          const CwTerm *t2)
 {
-  const CwTerm *t = t1 ? t1 : t2;
-  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  CwEnergyUnit unit = cw_window_get_energy_unit (self);
-  g_autofree char *label = cw_term_dup_label (t, mol);
+  const CwTerm    *t = t1 ? t1 : t2;
+  CwEnergyUnit     unit = cw_window_get_energy_unit (self);
+  g_autofree char *label = cw_term_dup_label (t, cw_document_peek_molecule (self->doc));
   g_autofree char *e1 = t1 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t1->energy, unit)) : g_strdup ("–");
   g_autofree char *e2 = t2 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t2->energy, unit)) : g_strdup ("–");
   g_autofree char *source = t->estimated ? g_strdup_printf (_("estimate: %s"), t->source ? t->source : "")
                                          : g_strdup (t->source ? t->source : "");
-  GtkWidget *src = cell (source, "dim-label", 0.0f);
+  const char *texts[N_COLUMNS] = { label, e1, e2, source };
 
-  gtk_label_set_ellipsize (GTK_LABEL (src), PANGO_ELLIPSIZE_END);
-  gtk_label_set_max_width_chars (GTK_LABEL (src), 48);
-  gtk_widget_set_hexpand (src, TRUE);
-  gtk_widget_set_tooltip_text (src, source);
-  gtk_grid_attach (self->terms_grid, cell (label, NULL, 0.0f), 0, row, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (e1, "cw-terms-value", 1.0f), 1, row, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (e2, "cw-terms-value", 1.0f), 2, row, 1, 1);
-  gtk_grid_attach (self->terms_grid, src, 3, row, 1, 1);
+  set_row (self, row, texts, FALSE);
 }
 
 static void
 update_terms (CwWindow *self)
 {
-  CwEnergyUnit unit = cw_window_get_energy_unit (self);
+  CwEnergyUnit     unit = cw_window_get_energy_unit (self);
   g_autofree char *h1 = NULL, *h2 = NULL, *tot1 = NULL, *tot2 = NULL;
-  int row = 1;
+  guint            row = 1;
 
-  clear_children (GTK_WIDGET (self->terms_grid));
-  if (!self->an_valid)
-    return;
-  /* TRANSLATORS: column header: energy of a term in chair 1, with the unit */
-  h1 = g_strdup_printf (_("Chair 1 (%s)"), cw_energy_unit_symbol (unit));
-  h2 = g_strdup_printf (_("Chair 2 (%s)"), cw_energy_unit_symbol (unit));
-  gtk_grid_attach (self->terms_grid, cell (_("Term"), "cw-terms-header", 0.0f), 0, 0, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (h1, "cw-terms-header", 1.0f), 1, 0, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (h2, "cw-terms-header", 1.0f), 2, 0, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (_("Source"), "cw-terms-header", 0.0f), 3, 0, 1, 1);
+  if (self->an_valid)
+    {
+      /* TRANSLATORS: column header: energy of a term in chair 1, with the unit */
+      h1 = g_strdup_printf (_("Chair 1 (%s)"), cw_energy_unit_symbol (unit));
+      h2 = g_strdup_printf (_("Chair 2 (%s)"), cw_energy_unit_symbol (unit));
+      set_row (self, 0, (const char *[N_COLUMNS]){ _("Term"), h1, h2, _("Source") }, TRUE);
 
-  for (int i = 0; i < self->an.chair[0].n_terms; i++)
-    {
-      const CwTerm *t = &self->an.chair[0].terms[i];
-      add_term_row (self, row++, t, find_term (&self->an.chair[1], t));
+      for (int i = 0; i < self->an.chair[0].n_terms; i++)
+        {
+          const CwTerm *t = &self->an.chair[0].terms[i];
+          term_row (self, row++, t, find_term (&self->an.chair[1], t));
+        }
+      for (int i = 0; i < self->an.chair[1].n_terms; i++)
+        {
+          const CwTerm *t = &self->an.chair[1].terms[i];
+          if (find_term (&self->an.chair[0], t) == NULL)
+            term_row (self, row++, NULL, t);
+        }
+      if (row == 1)
+        set_row (self, row++, (const char *[N_COLUMNS]){ _("No axial groups"), "–", "–", "" }, FALSE);
+      tot1 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[0].energy, unit));
+      tot2 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[1].energy, unit));
+      set_row (self, row++, (const char *[N_COLUMNS]){ _("Total"), tot1, tot2, "" }, TRUE);
     }
-  for (int i = 0; i < self->an.chair[1].n_terms; i++)
-    {
-      const CwTerm *t = &self->an.chair[1].terms[i];
-      if (find_term (&self->an.chair[0], t) == NULL)
-        add_term_row (self, row++, NULL, t);
-    }
-  if (row == 1)
-    {
-      gtk_grid_attach (self->terms_grid, cell (_("No terms: neither chair carries an axial group."), "dim-label", 0.0f),
-                       0, row++, 4, 1);
-    }
-  tot1 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[0].energy, unit));
-  tot2 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[1].energy, unit));
-  gtk_grid_attach (self->terms_grid, cell (_("Total"), "cw-terms-header", 0.0f), 0, row, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (tot1, "cw-terms-value", 1.0f), 1, row, 1, 1);
-  gtk_grid_attach (self->terms_grid, cell (tot2, "cw-terms-value", 1.0f), 2, row, 1, 1);
+  else
+    row = 0;
+  for (guint i = row * N_COLUMNS; i < self->term_cells->len; i++)
+    gtk_widget_set_visible (g_ptr_array_index (self->term_cells, i), FALSE);
 }
 
+/* ---- summary -------------------------------------------------------------------------- */
+
 static char *
-format_population (int     chair,
-                   double  pop,
-                   double  low,
-                   double  high)
+format_population (int    chair,
+                   double pop,
+                   double low,
+                   double high)
 {
   double lo = MIN (low, high) * 100.0, hi = MAX (low, high) * 100.0;
 
@@ -180,47 +231,33 @@ format_population (int     chair,
 static void
 update_summary (CwWindow *self)
 {
-  CwEnergyUnit unit = cw_window_get_energy_unit (self);
-  g_autofree char *p1 = NULL, *p2 = NULL, *t = NULL, *text = NULL, *kstr = NULL;
+  CwEnergyUnit      unit = cw_window_get_energy_unit (self);
+  g_autofree char  *p1 = NULL, *p2 = NULL, *t = NULL, *text = NULL, *kstr = NULL;
   const CwAnalysis *an = &self->an;
 
+  set_css_class (GTK_WIDGET (self->summary_label), "cw-error", !self->an_valid);
   if (!self->an_valid)
     {
       g_autofree char *msg = g_strdup_printf (_("No result: %s"), self->analysis_error ? self->analysis_error : "");
 
       gtk_label_set_text (self->summary_label, msg);
-      gtk_widget_add_css_class (GTK_WIDGET (self->summary_label), "cw-error");
       gtk_label_set_text (self->pop1_label, "");
       gtk_label_set_text (self->pop2_label, "");
       return;
     }
-  gtk_widget_remove_css_class (GTK_WIDGET (self->summary_label), "cw-error");
   p1 = format_population (1, an->pop[0], an->pop_low[0], an->pop_high[0]);
   p2 = format_population (2, an->pop[1], an->pop_low[1], an->pop_high[1]);
   gtk_label_set_text (self->pop1_label, p1);
   gtk_label_set_text (self->pop2_label, p2);
-  if (an->pop[0] > an->pop[1] + 1e-9)
-    {
-      gtk_widget_add_css_class (GTK_WIDGET (self->pop1_label), "cw-major");
-      gtk_widget_remove_css_class (GTK_WIDGET (self->pop2_label), "cw-major");
-    }
-  else if (an->pop[1] > an->pop[0] + 1e-9)
-    {
-      gtk_widget_add_css_class (GTK_WIDGET (self->pop2_label), "cw-major");
-      gtk_widget_remove_css_class (GTK_WIDGET (self->pop1_label), "cw-major");
-    }
-  else
-    {
-      gtk_widget_remove_css_class (GTK_WIDGET (self->pop1_label), "cw-major");
-      gtk_widget_remove_css_class (GTK_WIDGET (self->pop2_label), "cw-major");
-    }
+  set_css_class (GTK_WIDGET (self->pop1_label), "cw-major", an->pop[0] > an->pop[1] + 1e-9);
+  set_css_class (GTK_WIDGET (self->pop2_label), "cw-major", an->pop[1] > an->pop[0] + 1e-9);
 
   t = cw_format_temperature (an->temperature, cw_window_get_temperature_unit (self));
   kstr = (an->K >= 1e4 || an->K < 1e-3) ? g_strdup_printf ("%.2e", an->K) : g_strdup_printf ("%.3g", an->K);
   /* TRANSLATORS: the result line: ΔG°, its uncertainty, unit, temperature, equilibrium constant */
   text = g_strdup_printf (_("ΔG° = G(chair 2) − G(chair 1) = %+.2f ± %.2f %s at %s;  K = %s"),
-                          cw_energy_from_kcal (an->delta_g, unit), cw_energy_from_kcal (an->sigma, unit),
-                          cw_energy_unit_symbol (unit), t, kstr);
+                             cw_energy_from_kcal (an->delta_g, unit), cw_energy_from_kcal (an->sigma, unit),
+                             cw_energy_unit_symbol (unit), t, kstr);
   gtk_label_set_text (self->summary_label, text);
 }
 

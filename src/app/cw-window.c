@@ -30,9 +30,9 @@ widget_is_dark (GtkWidget *widget)
 {
   GdkRGBA fg;
 
-G_GNUC_BEGIN_IGNORE_DEPRECATIONS
+  G_GNUC_BEGIN_IGNORE_DEPRECATIONS
   gtk_style_context_get_color (gtk_widget_get_style_context (widget), &fg);
-G_GNUC_END_IGNORE_DEPRECATIONS
+  G_GNUC_END_IGNORE_DEPRECATIONS
   return 0.2126 * fg.red + 0.7152 * fg.green + 0.0722 * fg.blue > 0.5;
 }
 
@@ -42,7 +42,7 @@ cw_window_render_options (CwWindow        *self,
                           CwRenderOptions *opt)
 {
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+  int               sel = cw_ring_canvas_get_selected (self->ring_canvas);
 
   cw_render_options_init (opt);
   opt->unit = cw_window_get_energy_unit (self);
@@ -110,8 +110,8 @@ static void
 update_groups_store (CwWindow *self)
 {
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  guint n_table = cw_group_table_get_n_groups (self->data->groups);
-  guint n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
+  guint             n_table = cw_group_table_get_n_groups (self->data->groups);
+  guint             n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
   g_autoptr (GPtrArray) items = g_ptr_array_new_with_free_func (g_object_unref);
 
   /* Custom groups first: they are what the user just made. The store keeps borrowed
@@ -128,11 +128,11 @@ update_groups_store (CwWindow *self)
 static void
 update_editor (CwWindow *self)
 {
-  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  int sel = cw_ring_canvas_get_selected (self->ring_canvas);
+  const CwMolecule    *mol = cw_document_peek_molecule (self->doc);
+  int                  sel = cw_ring_canvas_get_selected (self->ring_canvas);
   const CwSubstituent *up = cw_molecule_get (mol, sel, CW_FACE_UP);
   const CwSubstituent *down = cw_molecule_get (mol, sel, CW_FACE_DOWN);
-  g_autofree char *text = g_strdup_printf (_("Carbon %d"), sel);
+  g_autofree char     *text = g_strdup_printf (_("Carbon %d"), sel);
 
   gtk_label_set_text (self->carbon_label, text);
   cw_group_chooser_set_group (self->up_chooser, up ? up->group : NULL);
@@ -144,10 +144,10 @@ update_editor (CwWindow *self)
 static void
 update_temperature_widgets (CwWindow *self)
 {
-  double k = cw_document_get_temperature (self->doc);
+  double            k = cw_document_get_temperature (self->doc);
   CwTemperatureUnit tu = cw_window_get_temperature_unit (self);
-  double offset = tu == CW_TUNIT_CELSIUS ? CW_ZERO_C : 0.0;
-  g_autofree char *label = cw_format_temperature (k, tu);
+  double            offset = tu == CW_TUNIT_CELSIUS ? CW_ZERO_C : 0.0;
+  g_autofree char  *label = cw_format_temperature (k, tu);
 
   self->updating_temperature = TRUE;
   gtk_adjustment_configure (self->temperature_adjustment, k - offset, 100.0 - offset, 600.0 - offset,
@@ -159,11 +159,11 @@ update_temperature_widgets (CwWindow *self)
 void
 cw_window_update_title (CwWindow *self)
 {
-  const char *title = cw_document_get_title (self->doc);
+  const char      *title = cw_document_get_title (self->doc);
   g_autofree char *basename = NULL;
   g_autofree char *shown = NULL;
   g_autofree char *config = cw_molecule_dup_configuration (cw_document_peek_molecule (self->doc));
-  gboolean modified = cw_window_get_modified (self);
+  gboolean         modified = cw_window_get_modified (self);
 
   if (title == NULL || *title == '\0')
     {
@@ -187,7 +187,7 @@ cw_window_refresh (CwWindow *self)
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
   g_autoptr (GError) error = NULL;
   CwConditions cond;
-  guint n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
+  guint        n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
 
   cw_document_get_conditions (self->doc, &cond);
   g_clear_pointer (&self->analysis_error, g_free);
@@ -203,6 +203,8 @@ cw_window_refresh (CwWindow *self)
   cw_window_update_results (self);
   cw_window_update_title (self);
   cw_window_update_edit_actions (self);
+  cw_window_update_smiles (self);
+  cw_window_update_pages (self);
   gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area));
   gtk_widget_queue_draw (GTK_WIDGET (self->profile_area));
   gtk_widget_queue_draw (GTK_WIDGET (self->scan_area));
@@ -323,7 +325,8 @@ temperature_value_changed_cb (CwWindow *self)
 static void
 lower_page_changed_cb (CwWindow *self)
 {
-  gtk_widget_queue_draw (GTK_WIDGET (self->scan_area));
+  if (self->pages_stale && self->doc != NULL)
+    cw_window_update_pages (self);
 }
 
 static void
@@ -356,6 +359,21 @@ selected_to_enum (const GValue       *value,
                   gpointer            user_data)
 {
   return g_variant_new_string (g_value_get_uint (value) == 1 ? "kj" : "kcal");
+}
+
+/* Built on first use: a shortcuts window costs more to build than the main window's
+ * whole ring pane, and most sessions never open it. */
+static void
+show_help_overlay_action (GtkWidget  *widget,
+                          const char *action_name,
+                          GVariant   *param)
+{
+  g_autoptr (GtkBuilder) builder = gtk_builder_new_from_resource ("/org/chairwise/Chairwise/ui/cw-shortcuts-window.ui");
+  GtkWindow *shortcuts = GTK_WINDOW (gtk_builder_get_object (builder, "shortcuts_window"));
+
+  gtk_window_set_transient_for (shortcuts, GTK_WINDOW (widget));
+  gtk_window_set_destroy_with_parent (shortcuts, TRUE);
+  gtk_window_present (shortcuts);
 }
 
 /* ---- GObject ------------------------------------------------------------------------ */
@@ -405,6 +423,10 @@ cw_window_finalize (GObject *object)
   g_clear_pointer (&self->doc, cw_document_free);
   g_clear_pointer (&self->history, cw_history_free);
   g_clear_pointer (&self->analysis_error, g_free);
+  g_clear_pointer (&self->term_cells, g_ptr_array_unref);
+  g_clear_pointer (&self->couplings, g_free);
+  g_clear_pointer (&self->reactivity, g_free);
+  g_clear_pointer (&self->flag_rows, g_ptr_array_unref);
 
   G_OBJECT_CLASS (cw_window_parent_class)->finalize (object);
 }
@@ -412,7 +434,7 @@ cw_window_finalize (GObject *object)
 static void
 cw_window_class_init (CwWindowClass *klass)
 {
-  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GObjectClass   *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
   GtkWindowClass *window_class = GTK_WINDOW_CLASS (klass);
 
@@ -448,6 +470,14 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, CwWindow, lower_stack);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, caution_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, recent_section);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, smiles_entry);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, smiles_note_label);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, couplings_grid);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, couplings_note);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, reactions_grid);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, reactions_note);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, isomers_grid);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, isomers_note);
   gtk_widget_class_bind_template_callback (widget_class, ring_selected_cb);
   gtk_widget_class_bind_template_callback (widget_class, ring_clear_requested_cb);
   gtk_widget_class_bind_template_callback (widget_class, ring_search_requested_cb);
@@ -458,9 +488,11 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_callback (widget_class, temperature_value_changed_cb);
   gtk_widget_class_bind_template_callback (widget_class, lower_page_changed_cb);
 
+  gtk_widget_class_install_action (widget_class, "win.show-help-overlay", NULL, show_help_overlay_action);
   cw_window_class_add_edit_actions (widget_class);
   cw_window_class_add_file_actions (widget_class);
   cw_window_class_add_export_actions (widget_class);
+  cw_window_class_add_smiles_actions (widget_class);
 }
 
 static void
@@ -477,11 +509,13 @@ cw_window_init (CwWindow *self)
   if (self->data == NULL)
     g_error ("Cannot load the group tables: %s", error->message);
 
-  self->settings = g_settings_new (CW_APP_ID);
+  self->settings = cw_app_settings_new ();
   self->history = cw_history_new (200);
   self->doc = cw_document_new ();
   cw_document_set_temperature (self->doc, g_settings_get_double (self->settings, "default-temperature"));
   self->groups_store = g_list_store_new (CW_TYPE_GROUP_ITEM);
+  self->term_cells = g_ptr_array_new ();
+  self->flag_rows = g_ptr_array_new ();
   self->n_custom_shown = G_MAXUINT;
 
   tunit = g_settings_create_action (self->settings, "temperature-unit");
@@ -510,6 +544,8 @@ cw_window_init (CwWindow *self)
 
   cw_window_file_init (self);
   cw_window_refresh (self);
+  /* Start on the ring, so keys 1-6 and typing work at once. */
+  gtk_window_set_focus (GTK_WINDOW (self), GTK_WIDGET (self->ring_canvas));
 }
 
 /* ---- public API ----------------------------------------------------------------------- */
@@ -586,7 +622,7 @@ cw_window_save_screenshot (CwWindow   *self,
                            GError    **error)
 {
   GtkWidget *widget = GTK_WIDGET (self);
-  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  int        w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
   g_autoptr (GdkPaintable) paintable = NULL;
   g_autoptr (GskRenderNode) node = NULL;
   g_autoptr (GdkTexture) texture = NULL;

@@ -20,6 +20,18 @@ choose_renderer (void)
     g_setenv ("GDK_DEBUG", "gl-disable", TRUE);
 }
 
+/* GTK 4.8 reaches the accessibility bus through the session bus; where there is none
+ * (a bare X server, a CI box) it can only warn, so do not try. */
+static void
+choose_accessibility (void)
+{
+  g_autofree char *socket = g_build_filename (g_get_user_runtime_dir (), "bus", NULL);
+
+  if (g_getenv ("GTK_A11Y") == NULL && g_getenv ("DBUS_SESSION_BUS_ADDRESS") == NULL &&
+      !g_file_test (socket, G_FILE_TEST_EXISTS))
+    g_setenv ("GTK_A11Y", "none", TRUE);
+}
+
 int
 main (int   argc,
       char *argv[])
@@ -27,8 +39,10 @@ main (int   argc,
   g_autoptr (CwApplication) app = NULL;
 
   choose_renderer ();
+  choose_accessibility ();
   setlocale (LC_ALL, "");
-  bindtextdomain (GETTEXT_PACKAGE, LOCALEDIR);
+  /* CHAIRWISE_LOCALEDIR lets an uninstalled build use its compiled catalogues (build/po). */
+  bindtextdomain (GETTEXT_PACKAGE, g_getenv ("CHAIRWISE_LOCALEDIR") ? g_getenv ("CHAIRWISE_LOCALEDIR") : LOCALEDIR);
   bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
   textdomain (GETTEXT_PACKAGE);
 

@@ -27,8 +27,9 @@ print_anti (const CwLeavingGroup *lg, int ch)
   if (lg->n_anti[ch] == 0)
     printf (_(", no anti-periplanar β-H on the ring"));
   for (int i = 0; i < lg->n_anti[ch]; i++)
-    printf (_("%s H-%d %s (%.0f°)"), i == 0 ? _(", anti-periplanar β-H:") : ",", lg->anti[ch][i].position,
-                                                  lg->anti[ch][i].face == CW_FACE_UP ? _("up") : _("down"), lg->anti[ch][i].torsion);
+    printf (_("%s %s-%d %s (%.0f°)"), i == 0 ? _(", anti-periplanar β-H:") : ",",
+                                                   lg->anti[ch][i].deuterium ? "D" : "H", lg->anti[ch][i].position,
+                                                   lg->anti[ch][i].face == CW_FACE_UP ? _("up") : _("down"), lg->anti[ch][i].torsion);
   printf ("\n");
 }
 
@@ -95,6 +96,7 @@ anti_json (const CwLeavingGroup *lg, int ch)
       cJSON_AddNumberToObject (h, "position", lg->anti[ch][i].position);
       cJSON_AddStringToObject (h, "face", cw_face_to_string (lg->anti[ch][i].face));
       cJSON_AddNumberToObject (h, "torsion_deg", lg->anti[ch][i].torsion);
+      cJSON_AddBoolToObject (h, "deuterium", lg->anti[ch][i].deuterium);
       cJSON_AddItemToArray (arr, h);
     }
   return arr;

@@ -11,6 +11,13 @@ static const CwCliCommand commands[] = {
   { "analyze", N_("Both chairs, every term, ΔG°, K and populations"), cw_cli_analyze },
   { "scan", N_("Chair populations against temperature (CSV)"), cw_cli_scan },
   { "groups", N_("The substituent table with A-values and sources"), cw_cli_groups },
+  { "isomers", N_("Every cis/trans isomer with its free energy and equilibrium share"), cw_cli_isomers },
+  { "batch", N_("Analyse a file of SMILES (one compound a line) to CSV or JSON"), cw_cli_batch },
+  { "draw", N_("Draw a figure to PNG, SVG or PDF"), cw_cli_draw },
+  { "report", N_("The one-page PDF report"), cw_cli_report },
+  { "geometry", N_("3D coordinates of a chair as XYZ"), cw_cli_geometry },
+  { "couplings", N_("Predicted vicinal couplings, and populations from a measured one"), cw_cli_couplings },
+  { "reactivity", N_("Anti-periplanar checks for E2 and trans-diaxial reactions"), cw_cli_reactivity },
 };
 
 static void

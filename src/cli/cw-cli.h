@@ -52,6 +52,8 @@ int         cw_cli_usage_error (GOptionContext *context, const char *command, co
 int cw_cli_analyze (int argc, char **argv);
 int cw_cli_scan (int argc, char **argv);
 int cw_cli_groups (int argc, char **argv);
+int cw_cli_draw (int argc, char **argv);   /* cw-cli-draw.c */
+int cw_cli_report (int argc, char **argv); /* cw-cli-draw.c */
 int cw_cli_geometry (int argc, char **argv);   /* cw-cli-nmr.c */
 int cw_cli_couplings (int argc, char **argv);  /* cw-cli-nmr.c */
 int cw_cli_reactivity (int argc, char **argv); /* cw-cli-reactivity.c */

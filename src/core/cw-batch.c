@@ -31,6 +31,9 @@ typedef struct
   char text[CACHE_TEXT];
 } CacheEntry;
 
+/* The tags are checked first: a small array that stays in the processor cache, so a miss
+ * (the usual case for a file of distinct compounds) costs no trip to memory. */
+
 typedef struct
 {
   const CwData *data;
@@ -47,6 +50,7 @@ typedef struct
   GString *scratch;
   GString *notes;
   CacheEntry *cache;
+  guint64 *tags;
   CwBatchSummary *sum;
   gboolean csv;
   int smiles_col, id_col;
@@ -221,10 +225,10 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
   if (b->opt->json)
     {
       g_string_append (s, "\"smiles\":\"");
-      cw_smiles_reader_write (b->reader, m, s);
+      cw_sm_reader_write_canonical (b->reader, m, s);
       g_string_append (s, "\",\"configuration\":\"");
       g_string_append (s, config);
-      g_string_append_printf (s, "\",\"major_chair\":%d,\"delta_g\":", an->major + 1);
+      g_string_append (s, an->major ? "\",\"major_chair\":2,\"delta_g\":" : "\",\"major_chair\":1,\"delta_g\":");
       append_num (s, an->delta_g, 3);
       g_string_append (s, ",\"sigma\":");
       append_num (s, an->sigma, 3);
@@ -242,10 +246,10 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
     }
   else
     {
-      cw_smiles_reader_write (b->reader, m, s);
+      cw_sm_reader_write_canonical (b->reader, m, s);
       g_string_append_c (s, ',');
       g_string_append (s, config);
-      g_string_append_printf (s, ",%d,", an->major + 1);
+      g_string_append (s, an->major ? ",2," : ",1,");
       append_num (s, an->delta_g, 3);
       g_string_append_c (s, ',');
       append_num (s, an->sigma, 3);
@@ -267,23 +271,24 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
       if (seen & (1u << code))
         continue;
       seen |= 1u << code;
+      if (n_flags)
+        g_string_append_c (s, b->opt->json ? ',' : ';');
       if (b->opt->json)
-        g_string_append_printf (s, "%s\"%s\"", n_flags ? "," : "", cw_flag_code_to_string (code));
-      else
-        g_string_append_printf (s, "%s%s", n_flags ? ";" : "", cw_flag_code_to_string (code));
+        g_string_append_c (s, '"');
+      g_string_append (s, cw_flag_code_to_string (code));
+      if (b->opt->json)
+        g_string_append_c (s, '"');
       n_flags++;
     }
 }
 
-static guint
+static guint64
 key_hash (const gint64 *key)
 {
   guint64 h = 0x9e3779b97f4a7c15ull;
   for (int i = 0; i < CW_SM_KEY_LEN; i++)
-    {
-      h ^= (guint64) key[i] + 0x9e3779b97f4a7c15ull + (h << 6) + (h >> 2);
-    }
-  return (guint) (h ^ (h >> 32)) & (CACHE_SLOTS - 1);
+    h = (h ^ (guint64) key[i]) * 0x100000001b3ull;
+  return (h ^ (h >> 29)) | 1; /* 0 marks an empty tag */
 }
 
 /* The molecule-dependent text, from the cache or computed; NULL (error set) on failure. */
@@ -293,10 +298,14 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
   CwRingTransform id = { 1, 1, FALSE };
   gint64 key[CW_SM_KEY_LEN];
   CacheEntry *e;
+  guint64 h;
+  guint slot;
 
   cw_sm_molecule_key (m, &id, key);
-  e = &b->cache[key_hash (key)];
-  if (e->len && memcmp (e->key, key, sizeof key) == 0)
+  h = key_hash (key);
+  slot = h & (CACHE_SLOTS - 1);
+  e = &b->cache[slot];
+  if (b->tags[slot] == h && memcmp (e->key, key, sizeof key) == 0)
     {
       *len = e->len;
       return e->text;
@@ -310,6 +319,7 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
       memcpy (e->key, key, sizeof key);
       memcpy (e->text, b->scratch->str, b->scratch->len);
       e->len = b->scratch->len;
+      b->tags[slot] = h;
     }
   *len = b->scratch->len;
   return b->scratch->str;
@@ -641,7 +651,8 @@ cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchO
   b->err = err;
   b->obuf = g_malloc (OUT_SIZE);
   b->scratch = g_string_sized_new (512);
-  b->cache = g_new0 (CacheEntry, CACHE_SLOTS);
+  b->cache = g_new (CacheEntry, CACHE_SLOTS);
+  b->tags = g_new0 (guint64, CACHE_SLOTS);
   b->sum = summary;
   b->first_row = TRUE;
   b->smiles_col = -2;
@@ -716,6 +727,7 @@ out:
   cw_smiles_reader_free (b->reader);
   g_free (b->obuf);
   g_free (b->cache);
+  g_free (b->tags);
   g_string_free (b->scratch, TRUE);
   g_free (ibuf);
   g_free (b);

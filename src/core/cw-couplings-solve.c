@@ -76,7 +76,7 @@ cw_multiplet_dup_text (const CwMultiplet *m)
   g_return_val_if_fail (m != NULL, NULL);
   s = g_string_new (m->pattern);
   for (int i = 0; i < m->n_j; i++)
-    g_string_append_printf (s, "%s%.1f", i == 0 ? ", " : ", ", m->j[i]);
+    g_string_append_printf (s, ", %.1f", m->j[i]);
   if (m->n_j > 0)
     g_string_append (s, " Hz");
   return g_string_free (s, FALSE);

@@ -273,7 +273,9 @@ cw_couplings_compute (const CwGeometryData *gd,
   out->pop[1] = pop[1];
   out->geminal = gd->geminal.value;
   out->geminal_source = gd->geminal.source;
-  out->set_request = set_id ? set_id : cw_geometry_data_find_set (gd, NULL)->id;
+  /* Never keep the caller's string: point into the table or at the constant. */
+  out->set_request = g_strcmp0 (set_id, CW_KARPLUS_BY_COUNT) == 0 ? CW_KARPLUS_BY_COUNT
+                                                                  : cw_geometry_data_find_set (gd, set_id)->id;
   for (int ch = 0; ch < 2; ch++)
     if (!cw_chair_geometry_build (gd, mol, ch, &out->geometry[ch], error))
       return FALSE;

@@ -68,6 +68,9 @@ typedef struct
   CwMultiplet multiplet[3]; /* chair 1, chair 2, averaged; the geminal 2J is included */
 } CwRingProton;
 
+/* A plain value filled by cw_couplings_compute (no allocation, nothing to free; about 11 kB, so
+ * heap-allocate it in UI code). Its strings and set pointers borrow from the CwGeometryData,
+ * which must outlive it. */
 typedef struct
 {
   double            temperature; /* K, as given */
@@ -79,7 +82,7 @@ typedef struct
   int               n_vicinal;
   double            geminal; /* 2J used for ring CH2 protons, Hz */
   const char       *geminal_source;
-  const char       *set_request;      /* the set id asked for, or CW_KARPLUS_BY_COUNT */
+  const char       *set_request;      /* the set id used (the table's default when none was asked), or CW_KARPLUS_BY_COUNT */
   gboolean          fragment_unknown; /* some substituent's β-atoms are unknown (its corrections are rougher) */
 } CwCouplings;
 

@@ -77,7 +77,11 @@ read_atom (const char *smiles, const char **pp, Atom *a, GError **error)
 
       p++;
       while (g_ascii_isdigit (*p))
-        isotope = isotope * 10 + (*p++ - '0');
+        {
+          if (isotope < 1000) /* mass numbers are at most three digits; never overflow */
+            isotope = isotope * 10 + (*p - '0');
+          p++;
+        }
       start = p;
       if (g_ascii_islower (*p))
         a->aromatic = TRUE, p++;
@@ -293,8 +297,11 @@ void
 cw_fragment_info (const CwGroup *group, CwFragmentInfo *out)
 {
   g_return_if_fail (group != NULL && out != NULL);
+  /* The table may write deuterium's first atom as H: H and D are the same atom here. */
   if (group->smiles != NULL && *group->smiles != '\0' && cw_fragment_parse (group->smiles, out, NULL) &&
-      out->first_atom == group->first_atom)
+      (out->first_atom == group->first_atom ||
+       ((out->first_atom == CW_EL_D || out->first_atom == CW_EL_H) &&
+        (group->first_atom == CW_EL_D || group->first_atom == CW_EL_H))))
     return;
   memset (out, 0, sizeof *out);
   out->first_atom = group->first_atom;

@@ -29,7 +29,7 @@ cw_json_parse (const char *data, gsize len, const char *name, GError **error)
       for (gsize i = 0; i < offset; i++)
         if (data[i] == '\n')
           line++;
-      snippet = g_strndup (data + offset, MIN ((gsize) 20, len - offset));
+      snippet = g_utf8_make_valid (data + offset, (gssize) MIN ((gsize) 20, len - offset));
       g_strdelimit (snippet, "\n\r\t", ' ');
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_PARSE,
                    _("%s: invalid JSON at line %d (byte %lu) near “%s”"),

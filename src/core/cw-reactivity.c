@@ -65,11 +65,13 @@ find_anti_hydrogens (const CwMolecule *mol, CwReactivity *r, CwLeavingGroup *lg,
             {
               int    h = g->slot[b - 1][f];
               double t;
-              if (g->atoms[h].kind != CW_ATOM_HYDROGEN || lg->n_anti[ch] >= 2)
+              /* A deuterio group counts as a β-hydrogen isotope. */
+              if (!is_hydrogen_like (g->atoms[h].element) || lg->n_anti[ch] >= 2)
                 continue;
               t = cw_chair_geometry_torsion (g, x, g->ring[s->position - 1], g->ring[b - 1], h);
               if (fabs (t) >= r->anti_min)
-                lg->anti[ch][lg->n_anti[ch]++] = (CwAntiHydrogen){ b, (CwFace) f, h, t };
+                lg->anti[ch][lg->n_anti[ch]++] =
+                  (CwAntiHydrogen){ b, (CwFace) f, h, t, g->atoms[h].kind == CW_ATOM_SUBSTITUENT };
             }
         }
     }

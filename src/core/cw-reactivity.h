@@ -20,10 +20,11 @@ G_BEGIN_DECLS
 
 typedef struct
 {
-  int    position; /* β ring carbon */
-  CwFace face;     /* face of the β-hydrogen */
-  int    atom;     /* its atom index in the chair geometry */
-  double torsion;  /* LG–Cα–Cβ–H, degrees */
+  int      position;  /* β ring carbon */
+  CwFace   face;      /* face of the β-hydrogen */
+  int      atom;      /* its atom index in the chair geometry */
+  double   torsion;   /* LG–Cα–Cβ–H, degrees */
+  gboolean deuterium; /* the slot carries the deuterio group: an anti E2 would lose D */
 } CwAntiHydrogen;
 
 typedef struct
@@ -87,6 +88,9 @@ typedef struct
   double             value; /* e.g. the reactive fraction */
 } CwReactWarning;
 
+/* A plain value filled by cw_reactivity_compute (no allocation, nothing to free). Substituent
+ * indexes refer to the molecule passed in; atom indexes to geometry[chair] (use them to highlight
+ * the anti-periplanar hydrogens on a chair drawing). */
 typedef struct
 {
   double          temperature;

@@ -21,10 +21,18 @@ cw_sm_group_rank (const CwGroup *g)
   return 100000 + (g->id ? g_str_hash (g->id) % 1000000 : 0);
 }
 
-static int
+/* source position of result position p under start s (1..6) and direction d (0: +1, 1: -1) */
+static const guint8 source_table[2][CW_RING_SIZE + 1][CW_RING_SIZE + 1] = {
+  { { 0 }, { 0, 1, 2, 3, 4, 5, 6 }, { 0, 2, 3, 4, 5, 6, 1 }, { 0, 3, 4, 5, 6, 1, 2 },
+    { 0, 4, 5, 6, 1, 2, 3 }, { 0, 5, 6, 1, 2, 3, 4 }, { 0, 6, 1, 2, 3, 4, 5 } },
+  { { 0 }, { 0, 1, 6, 5, 4, 3, 2 }, { 0, 2, 1, 6, 5, 4, 3 }, { 0, 3, 2, 1, 6, 5, 4 },
+    { 0, 4, 3, 2, 1, 6, 5 }, { 0, 5, 4, 3, 2, 1, 6 }, { 0, 6, 5, 4, 3, 2, 1 } },
+};
+
+static inline int
 source_position (const CwRingTransform *t, int p)
 {
-  return ((t->start - 1 + t->dir * (p - 1)) % 6 + 12) % 6 + 1;
+  return source_table[t->dir < 0][t->start][p];
 }
 
 static gboolean
@@ -45,28 +53,51 @@ cw_sm_transform_swaps (const CwRingTransform *t)
   return swaps_faces (t);
 }
 
-void
-cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
+typedef struct
 {
-  const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  gint64 occupancy = 0;
-  gboolean swap = swaps_faces (t);
+  gint64 rank[CW_RING_SIZE + 1][2]; /* [position][0 up, 1 down] */
+  int count[CW_RING_SIZE + 1];
+} Slots;
 
+static void
+fill_slots (const CwMolecule *mol, Slots *s)
+{
+  for (int p = 0; p <= CW_RING_SIZE; p++)
+    {
+      s->rank[p][0] = s->rank[p][1] = EMPTY;
+      s->count[p] = 0;
+    }
   for (int i = 0; i < mol->n_subs; i++)
     {
-      const CwSubstituent *s = &mol->subs[i];
-      slot[s->position][s->face == CW_FACE_UP ? 0 : 1] = s->group;
+      const CwSubstituent *x = &mol->subs[i];
+      s->rank[x->position][x->face == CW_FACE_UP ? 0 : 1] = cw_sm_group_rank (x->group);
+      s->count[x->position]++;
     }
+}
+
+static void
+key_from_slots (const Slots *s, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
+{
+  int swap = swaps_faces (t) ? 1 : 0;
+  gint64 occupancy = 0;
+
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
       int q = source_position (t, p);
-      const CwGroup *up = slot[q][swap ? 1 : 0], *down = slot[q][swap ? 0 : 1];
-      int count = (up != NULL) + (down != NULL);
-      occupancy = occupancy * 3 + (2 - count);
-      key[2 * p - 1] = cw_sm_group_rank (up);
-      key[2 * p] = cw_sm_group_rank (down);
+      occupancy = occupancy * 3 + (2 - s->count[q]);
+      key[2 * p - 1] = s->rank[q][swap];
+      key[2 * p] = s->rank[q][1 - swap];
     }
   key[0] = occupancy;
+}
+
+void
+cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
+{
+  Slots s;
+
+  fill_slots (mol, &s);
+  key_from_slots (&s, t, key);
 }
 
 static int
@@ -83,13 +114,21 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
 {
   gint64 best[CW_SM_KEY_LEN], key[CW_SM_KEY_LEN];
   gboolean have = FALSE;
+  Slots s;
+  int max_count = 0;
 
+  fill_slots (mol, &s);
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    max_count = MAX (max_count, s.count[p]);
   for (int f = 0; f < (mirror ? 2 : 1); f++)
     for (int d = 0; d < 2; d++)
-      for (int s = 1; s <= CW_RING_SIZE; s++)
+      for (int st = 1; st <= CW_RING_SIZE; st++)
         {
-          CwRingTransform t = { s, d ? -1 : 1, f };
-          cw_sm_molecule_key (mol, &t, key);
+          CwRingTransform t = { st, d ? -1 : 1, f };
+          /* only numberings that start on a carbon with the most groups can win */
+          if (s.count[st] != max_count)
+            continue;
+          key_from_slots (&s, &t, key);
           if (!have || compare_keys (key, best) < 0)
             {
               memcpy (best, key, sizeof best);

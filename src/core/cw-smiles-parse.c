@@ -129,12 +129,29 @@ default_bond (Parser *p, int a, int b)
 }
 
 static int
-lookup_symbol (const char *s, int n)
+lookup_symbol_slow (const char *s, int n)
 {
   for (int z = 1; z < N_ELEMENTS; z++)
     if ((int) strlen (element_symbols[z]) == n && strncmp (element_symbols[z], s, n) == 0)
       return z;
   return -1;
+}
+
+static int
+lookup_symbol (const char *s, int n)
+{
+  /* the common one-letter symbols without a search */
+  if (n == 1)
+    switch (s[0])
+      {
+      case 'C': return 6;
+      case 'N': return 7;
+      case 'O': return 8;
+      case 'H': return 1;
+      case 'S': return 16;
+      default: break;
+      }
+  return lookup_symbol_slow (s, n);
 }
 
 /* Parses "[...]" at p->i into atom a. */
@@ -610,8 +627,7 @@ cw_sm_parse (CwSmGraph *g, const char *text, int len, gboolean fragment, GError 
   p.bond = 0;
   p.depth = 0;
   p.n_open = 0;
-  for (int k = 0; k < 100; k++)
-    p.ring[k].atom = -1;
+  memset (p.ring, 0xff, sizeof p.ring); /* every atom field -1: free */
   if (!parse_loop (&p, error) || !check_end (&p, error))
     return FALSE;
   for (int k = 0; k < g->n_atoms; k++)

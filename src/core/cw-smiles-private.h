@@ -133,13 +133,32 @@ void           cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index
                                     char **fwd, char **rev, gboolean *owned);
 
 typedef struct _CwSmilesInfo CwSmilesInfo;
+typedef struct _CwSmilesReader CwSmilesReader;
 
 /* cw-smiles-read.c: the whole reading; returns the number of molecules or -1 (error set). */
 int      cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len,
                      CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes,
                      GError **error);
 
+/* The raw reading, for tests: graph atom indices (text order) of the ring and of each group's
+ * first atom, and each group's face relative to the ring as read (-1 when not written). */
+typedef struct
+{
+  int ring_atom[CW_RING_SIZE];
+  int root_atom[CW_MAX_SUBS];
+  int ring_index[CW_MAX_SUBS];
+  int face[CW_MAX_SUBS];
+  const CwGroup *group[CW_MAX_SUBS];
+} CwSmDetail;
+int      cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text,
+                            int len, CwSmDetail *detail, GError **error);
+int      cw_sm_reader_read_detail (CwSmilesReader *reader, const char *text, CwSmDetail *detail,
+                                   GError **error);
+
 /* cw-smiles-write.c: canonical isomeric SMILES of a molecule (index may be NULL). */
 void     cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *out);
+/* The same for a molecule already numbered canonically (as the reader returns them). */
+void     cw_sm_write_canonical (const CwMolecule *mol, const CwSmIndex *index, GString *out);
+void     cw_sm_reader_write_canonical (CwSmilesReader *reader, const CwMolecule *mol, GString *out);
 
 G_END_DECLS

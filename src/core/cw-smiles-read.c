@@ -45,6 +45,15 @@ choose_component (Reading *r, GString *notes, CwSmilesInfo *info)
   CwSmGraph *g = r->g;
   int queue[CW_SM_MAX_ATOMS], n_comp = 0, best = 0, best_heavy = -1, heavy[CW_SM_MAX_ATOMS];
 
+  if (g->n_dots == 0)
+    {
+      /* one part (ring bonds cannot join parts that the text does not separate) */
+      for (int i = 0; i < g->n_atoms; i++)
+        r->comp[i] = 0;
+      r->keep = 0;
+      info->n_dropped = 0;
+      return 0;
+    }
   for (int i = 0; i < g->n_atoms; i++)
     r->comp[i] = -1;
   for (int i = 0; i < g->n_atoms; i++)
@@ -480,13 +489,12 @@ fill_molecule (const Reading *r, guint open_bits, const int *open_ring, int n_op
 }
 
 static void
-canonicalize (CwMolecule *m)
+canonicalize (CwMolecule *m, int n_relevant)
 {
-  gboolean relevant[CW_RING_SIZE + 1];
   CwRingTransform t;
   CwMolecule tmp;
 
-  cw_sm_canonical_transform (m, cw_sm_relevant_carbons (m, relevant) < 2, &t);
+  cw_sm_canonical_transform (m, n_relevant < 2, &t);
   tmp.custom_groups = NULL;
   cw_sm_apply_transform (m, &t, &tmp);
   memcpy (m->subs, tmp.subs, sizeof (CwSubstituent) * tmp.n_subs);
@@ -524,20 +532,27 @@ make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GS
 
       if (all_open && n_open > 0 && (bits & 1))
         continue; /* the first open carbon fixes the frame */
-      fill_molecule (r, bits, open_ring, n_open, &m);
-      cw_sm_canonical_transform (&m, TRUE, &t);
-      cw_sm_molecule_key (&m, &t, keys[n_out]);
-      for (int k = 0; k < n_out && !dup; k++)
-        dup = memcmp (keys[k], keys[n_out], sizeof keys[k]) == 0;
-      if (dup)
-        continue;
+      if (n_open == 0)
+        m = base;
+      else
+        fill_molecule (r, bits, open_ring, n_open, &m);
+      if (n_open > 0)
+        {
+          /* isomers that differ only by mirror image or numbering are one relative configuration */
+          cw_sm_canonical_transform (&m, TRUE, &t);
+          cw_sm_molecule_key (&m, &t, keys[n_out]);
+          for (int k = 0; k < n_out && !dup; k++)
+            dup = memcmp (keys[k], keys[n_out], sizeof keys[k]) == 0;
+          if (dup)
+            continue;
+        }
       if (n_out >= max_out)
         {
           cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, r->g, -1,
                            _("more cis/trans isomers than fit (%d)"), max_out);
           return -1;
         }
-      canonicalize (&m);
+      canonicalize (&m, n_rel); /* open faces do not change which carbons are relevant */
       out[n_out].n_subs = m.n_subs;
       out[n_out].custom_groups = NULL;
       memcpy (out[n_out].subs, m.subs, sizeof (CwSubstituent) * m.n_subs);
@@ -602,4 +617,39 @@ cw_sm_perceive_aromatic_rings (CwSmGraph *g)
   find_cycles (r);
   perceive_aromatic (r);
   g_free (r);
+}
+
+int
+cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len,
+                   CwSmDetail *detail, GError **error)
+{
+  Reading *r = g_new (Reading, 1);
+  CwSmilesInfo info;
+  int n = -1;
+
+  r->g = g;
+  r->mask = mask;
+  r->index = index;
+  g->error_pos = -1;
+  if (cw_sm_parse (g, text, len, FALSE, error))
+    {
+      choose_component (r, NULL, &info);
+      find_cycles (r);
+      perceive_aromatic (r);
+      if (choose_ring (r, NULL, error) && cut_substituents (r, error))
+        {
+          read_faces (r);
+          n = r->n_subs;
+          memcpy (detail->ring_atom, r->ring, sizeof r->ring);
+          for (int s = 0; s < n; s++)
+            {
+              detail->root_atom[s] = r->sub_atom[s];
+              detail->ring_index[s] = r->sub_ring[s];
+              detail->face[s] = r->sub_face[s];
+              detail->group[s] = r->sub_group[s];
+            }
+        }
+    }
+  g_free (r);
+  return n;
 }

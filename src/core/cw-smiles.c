@@ -213,6 +213,18 @@ cw_smiles_reader_write (CwSmilesReader *reader, const CwMolecule *mol, GString *
   cw_sm_write_molecule (mol, reader ? reader->index : NULL, out);
 }
 
+void
+cw_sm_reader_write_canonical (CwSmilesReader *reader, const CwMolecule *mol, GString *out)
+{
+  cw_sm_write_canonical (mol, reader->index, out);
+}
+
+int
+cw_sm_reader_read_detail (CwSmilesReader *reader, const char *text, CwSmDetail *detail, GError **error)
+{
+  return cw_sm_read_detail (reader->index, &reader->graph, reader->mask, text, strlen (text), detail, error);
+}
+
 const CwGroup *
 cw_smiles_reader_match_fragment (CwSmilesReader *reader, const char *fragment, GError **error)
 {

@@ -7,7 +7,7 @@
 static CwVec3
 vsub (CwVec3 a, CwVec3 b)
 {
-  return (CwVec3) { a.x - b.x, a.y - b.y, a.z - b.z };
+  return (CwVec3){ a.x - b.x, a.y - b.y, a.z - b.z };
 }
 
 static CwVec3
@@ -15,7 +15,7 @@ vunit (CwVec3 a)
 {
   double n = sqrt (a.x * a.x + a.y * a.y + a.z * a.z);
 
-  return (CwVec3) { a.x / n, a.y / n, a.z / n };
+  return (CwVec3){ a.x / n, a.y / n, a.z / n };
 }
 
 void
@@ -28,11 +28,11 @@ cw_chair3d_build (CwChair3D *chair, int which)
 
   for (int k = 0; k < 6; k++)
     {
-      double phi = -k * G_PI / 3.0;
+      double   phi = -k * G_PI / 3.0;
       gboolean up = ((k % 2) == 0) == (which == 0);
 
       chair->up[k] = up;
-      chair->atom[k] = (CwVec3) { r * cos (phi), r * sin (phi), up ? h : -h };
+      chair->atom[k] = (CwVec3){ r * cos (phi), r * sin (phi), up ? h : -h };
     }
   for (int k = 0; k < 6; k++)
     {
@@ -43,8 +43,8 @@ cw_chair3d_build (CwChair3D *chair, int which)
 
       chair->axial[k] = ax;
       /* The four tetrahedral directions sum to zero. */
-      chair->equatorial[k] = vunit ((CwVec3) { -(u1.x + u2.x + ax.x), -(u1.y + u2.y + ax.y),
-                                               -(u1.z + u2.z + ax.z) });
+      chair->equatorial[k] = vunit ((CwVec3){ -(u1.x + u2.x + ax.x), -(u1.y + u2.y + ax.y),
+                                              -(u1.z + u2.z + ax.z) });
     }
 }
 

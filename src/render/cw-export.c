@@ -49,7 +49,7 @@ cw_render_write_atomic (const char *path, CwWriteFunc write, gpointer user_data,
   g_autofree char *dir = g_path_get_dirname (path);
   g_autofree char *base = g_path_get_basename (path);
   g_autofree char *tmp = g_strdup_printf ("%s%c.%s.XXXXXX", dir, G_DIR_SEPARATOR, base);
-  int fd;
+  int              fd;
 
   if (g_file_test (path, G_FILE_TEST_IS_DIR))
     {
@@ -60,8 +60,7 @@ cw_render_write_atomic (const char *path, CwWriteFunc write, gpointer user_data,
   if (fd < 0)
     {
       int saved = errno;
-      g_set_error (error, CW_RENDER_ERROR, CW_RENDER_ERROR_IO, _("Cannot write “%s”: %s"), path,
-                   g_strerror (saved));
+      g_set_error (error, CW_RENDER_ERROR, CW_RENDER_ERROR_IO, _("Cannot write “%s”: %s"), path, g_strerror (saved));
       return FALSE;
     }
   /* mkstemp makes the file private; give it the permissions a new file would get. */
@@ -79,8 +78,7 @@ cw_render_write_atomic (const char *path, CwWriteFunc write, gpointer user_data,
     {
       int saved = errno;
       g_unlink (tmp);
-      g_set_error (error, CW_RENDER_ERROR, CW_RENDER_ERROR_IO, _("Cannot write “%s”: %s"), path,
-                   g_strerror (saved));
+      g_set_error (error, CW_RENDER_ERROR, CW_RENDER_ERROR_IO, _("Cannot write “%s”: %s"), path, g_strerror (saved));
       return FALSE;
     }
   return TRUE;
@@ -121,8 +119,55 @@ typedef struct
   double width, height; /* points */
   double dpi;
   void (*draw) (cairo_t *cr, gpointer user_data, double width, double height);
-  gpointer user_data;
+  gpointer       user_data;
+  const CwScene *scene; /* for the text layer of an SVG, or NULL */
 } Job;
+
+/* Cairo writes SVG text as glyph outlines. Add every label once more as real, transparent
+ * <text>, placed where it is drawn, so the file can be searched, selected and read aloud. */
+static gboolean
+svg_add_text_layer (const char *path, const CwScene *scene, double width, double height, GError **error)
+{
+  g_autofree char *svg = NULL;
+  g_autoptr (GString) layer = g_string_new ("<g id=\"chairwise-text\" fill-opacity=\"0\" stroke=\"none\">\n");
+  double s = MIN (width / scene->width, height / scene->height);
+  double ox = 0.5 * (width - s * scene->width) - s * scene->origin_x;
+  double oy = 0.5 * (height - s * scene->height) - s * scene->origin_y;
+  char  *end;
+  gsize  len;
+
+  if (!g_file_get_contents (path, &svg, &len, error))
+    return FALSE;
+  end = g_strrstr (svg, "</svg>");
+  if (end == NULL)
+    {
+      g_set_error (error, CW_RENDER_ERROR, CW_RENDER_ERROR_DRAW, _("the SVG surface wrote no closing tag"));
+      return FALSE;
+    }
+  for (guint i = 0; i < scene->prims->len; i++)
+    {
+      const CwPrim    *p = &g_array_index (scene->prims, CwPrim, i);
+      g_autofree char *plain = NULL, *esc = NULL;
+      char             x[G_ASCII_DTOSTR_BUF_SIZE], y[G_ASCII_DTOSTR_BUF_SIZE], fs[G_ASCII_DTOSTR_BUF_SIZE];
+
+      if (p->kind != CW_PRIM_TEXT)
+        continue;
+      plain = cw_markup_dup_plain (p->markup);
+      esc = g_markup_escape_text (plain, -1);
+      g_ascii_formatd (x, sizeof x, "%.2f", ox + s * p->box.x);
+      g_ascii_formatd (y, sizeof y, "%.2f", oy + s * (p->box.y + 0.8 * p->box.h));
+      g_ascii_formatd (fs, sizeof fs, "%.2f", s * p->size);
+      g_string_append_printf (layer, "<text x=\"%s\" y=\"%s\" font-size=\"%s\">%s</text>\n", x, y, fs, esc);
+    }
+  g_string_append (layer, "</g>\n");
+  {
+    g_autoptr (GString) out = g_string_new_len (svg, end - svg);
+
+    g_string_append (out, layer->str);
+    g_string_append (out, end);
+    return g_file_set_contents (path, out->str, out->len, error);
+  }
+}
 
 static gboolean
 write_job (const char *tmp, gpointer user_data, GError **error)
@@ -132,63 +177,50 @@ write_job (const char *tmp, gpointer user_data, GError **error)
   g_autoptr (cairo_t) cr = NULL;
   cairo_status_t status;
 
-  switch (job->format)
+  if (job->format == FORMAT_PNG)
     {
-    case FORMAT_PNG:
-      surface = cairo_image_surface_create (CAIRO_FORMAT_RGB24, (int) lround (job->width * job->dpi / 72.0),
-                                            (int) lround (job->height * job->dpi / 72.0));
-      break;
-    case FORMAT_SVG:
-      surface = cairo_svg_surface_create (tmp, job->width, job->height);
-      break;
-    case FORMAT_PDF:
-    default:
+      g_assert (job->scene != NULL);
+      return cw_render_write_png_scene (job->scene, job->width, job->height, job->dpi, tmp, error);
+    }
+  if (job->format == FORMAT_SVG)
+    surface = cairo_svg_surface_create (tmp, job->width, job->height);
+  else
+    {
       surface = cairo_pdf_surface_create (tmp, job->width, job->height);
       cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR, "Chairwise " PACKAGE_VERSION);
-      break;
     }
   if (!check_cairo (cairo_surface_status (surface), error))
     return FALSE;
   cr = cairo_create (surface);
   cairo_set_source_rgb (cr, 1, 1, 1);
   cairo_paint (cr);
-  if (job->format == FORMAT_PNG)
-    cairo_scale (cr, job->dpi / 72.0, job->dpi / 72.0);
   job->draw (cr, job->user_data, job->width, job->height);
   status = cairo_status (cr);
   g_clear_pointer (&cr, cairo_destroy);
   if (!check_cairo (status, error))
     return FALSE;
-  if (job->format == FORMAT_PNG)
-    return check_cairo (cairo_surface_write_to_png (surface, tmp), error);
   cairo_surface_finish (surface);
-  return check_cairo (cairo_surface_status (surface), error);
+  if (!check_cairo (cairo_surface_status (surface), error))
+    return FALSE;
+  if (job->format == FORMAT_SVG && job->scene != NULL)
+    return svg_add_text_layer (tmp, job->scene, job->width, job->height, error);
+  return TRUE;
 }
 
-typedef struct
-{
-  CwFigure fig;
-  const CwData *data;
-  const CwMolecule *mol;
-  const CwAnalysis *an;
-  CwRenderOptions opt;
-} FigureJob;
-
 static void
-draw_figure (cairo_t *cr, gpointer user_data, double width, double height)
+draw_scene (cairo_t *cr, gpointer user_data, double width, double height)
 {
-  FigureJob *fj = user_data;
-
-  cw_render_figure (cr, fj->fig, fj->data, fj->mol, fj->an, &fj->opt, width, height);
+  cw_render_paint_scene (cr, user_data, FALSE, width, height);
 }
 
 gboolean
-cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc,
-                         const CwRenderOptions *opt, const char *path, double dpi, GError **error)
+cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc, const CwRenderOptions *opt, const char *path, double dpi, GError **error)
 {
-  CwAnalysis an;
-  FigureJob fj = { fig, data, cw_document_peek_molecule (doc), &an, *opt };
-  Job job = { 0 };
+  CwAnalysis      an;
+  CwRenderOptions light;
+  g_autoptr (CwScene) scene = NULL;
+  double w0, h0;
+  Job    job = { 0 };
 
   g_return_val_if_fail (data != NULL && doc != NULL && opt != NULL && path != NULL, FALSE);
   if (!format_from_path (path, &job.format, error))
@@ -201,17 +233,24 @@ cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc
     }
   if (!cw_render_analyze_document (data, doc, &an, error))
     return FALSE;
-  fj.opt.dark = FALSE; /* exports are always on white */
-  cw_render_figure_size (fig, &job.width, &job.height);
+  light = *opt;
+  light.dark = FALSE; /* exports are always on white */
+  light.highlight_sub = -1;
+  /* The page is the figure's own size at the design scale, in points. */
+  cw_render_figure_size (fig, &w0, &h0);
+  scene = cw_render_build_figure (fig, data, cw_document_peek_molecule (doc), &an, &light, w0, h0);
+  job.width = ceil (scene->width);
+  job.height = ceil (scene->height);
   job.dpi = dpi;
-  job.draw = draw_figure;
-  job.user_data = &fj;
+  job.draw = draw_scene;
+  job.user_data = scene;
+  job.scene = scene;
   return cw_render_write_atomic (path, write_job, &job, error);
 }
 
 typedef struct
 {
-  const CwData *data;
+  const CwData     *data;
   const CwDocument *doc;
   const CwAnalysis *an;
 } ReportJob;
@@ -225,12 +264,11 @@ draw_report (cairo_t *cr, gpointer user_data, double width, double height)
 }
 
 gboolean
-cw_render_export_report (const CwData *data, const CwDocument *doc, const char *paper,
-                         const char *path, GError **error)
+cw_render_export_report (const CwData *data, const CwDocument *doc, const char *paper, const char *path, GError **error)
 {
-  CwAnalysis an;
-  ReportJob rj = { data, doc, &an };
-  Job job = { 0 };
+  CwAnalysis  an;
+  ReportJob   rj = { data, doc, &an };
+  Job         job = { 0 };
   const char *dot;
 
   g_return_val_if_fail (data != NULL && doc != NULL && path != NULL, FALSE);

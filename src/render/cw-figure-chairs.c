@@ -17,28 +17,29 @@
 
 typedef struct
 {
-  CwPoint atom;     /* page position of the ring carbon */
-  CwPoint end;      /* where the bond stops */
-  CwPoint dir;      /* page direction, unit */
-  double length;
+  CwPoint  atom; /* page position of the ring carbon */
+  CwPoint  end;  /* where the bond stops */
+  CwPoint  dir;  /* page direction, unit */
+  double   length;
   gboolean placed;
 } SubPlace;
 
 typedef struct
 {
-  CwScene *scene;
-  const CwMolecule *mol;
-  const CwAnalysis *an;
+  CwScene               *scene;
+  const CwMolecule      *mol;
+  const CwAnalysis      *an;
   const CwRenderOptions *opt;
-  double bond;      /* ring bond length on the page */
-  CwPlacer placer;
-  CwChair3D chair3d;
-  CwPoint atom[6];
-  SubPlace sub[CW_MAX_SUBS];
-  int which;
-  double azimuth;
-  const int *order; /* substituents in placing order */
-  int failures;     /* labels that found no clear spot */
+  double                 bond; /* ring bond length on the page */
+  CwPlacer               placer;
+  CwChair3D              chair3d;
+  CwPoint                atom[6];
+  SubPlace               sub[CW_MAX_SUBS];
+  int                    which;
+  double                 azimuth;
+  gboolean               major;    /* drawn on the major chair's panel */
+  const int             *order;    /* substituents in placing order */
+  int                    failures; /* labels that found no clear spot */
 } ChairLayout;
 
 static CwPoint
@@ -48,7 +49,7 @@ project_dir (const ChairLayout *cl, const CwVec3 *v)
 
   cw_chair_project (v, cl->azimuth, CW_CHAIR_TILT, &x, &y);
   n = hypot (x, y);
-  return (CwPoint) { x / n, y / n };
+  return (CwPoint){ x / n, y / n };
 }
 
 static void
@@ -63,7 +64,7 @@ draw_ring (ChairLayout *cl, double cx, double cy, gboolean major)
       double x, y;
 
       cw_chair_project (&cl->chair3d.atom[k], cl->azimuth, CW_CHAIR_TILT, &x, &y);
-      cl->atom[k] = (CwPoint) { x * cl->bond, y * cl->bond };
+      cl->atom[k] = (CwPoint){ x * cl->bond, y * cl->bond };
       minx = MIN (minx, cl->atom[k].x);
       maxx = MAX (maxx, cl->atom[k].x);
       miny = MIN (miny, cl->atom[k].y);
@@ -87,17 +88,29 @@ draw_ring (ChairLayout *cl, double cx, double cy, gboolean major)
 
 /* One bond and its label, the bond lengthened until the label is clear. */
 static void
-place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double size, double base,
-             CwRole role, int sub, gboolean axial, SubPlace *out)
+place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double size, double base, CwRole role, int sub, gboolean axial, SubPlace *out)
 {
-  CwPoint a = cl->atom[k];
+  CwPoint      a = cl->atom[k];
   CwLabelPlace place = { 0 };
-  CwLabelText lt = { 0 };
-  gboolean h = role == CW_ROLE_HYDROGEN;
-  CwPrim *p;
+  CwLabelText  lt = { 0 };
+  gboolean     h = role == CW_ROLE_HYDROGEN;
+  CwPrim      *p;
+
+  gboolean show_label = TRUE;
 
   if (cw_placer_place_label (&cl->placer, markup, size, a.x, a.y, dir.x, dir.y, base, &place, &lt) > 0)
-    cl->failures++;
+    {
+      if (!h)
+        cl->failures++;
+      else
+        {
+          /* No clear spot for this hydrogen's letter: keep a short bond alone rather than
+           * write over a group. */
+          show_label = FALSE;
+          place.ex = a.x + dir.x * 0.3 * cl->bond;
+          place.ey = a.y + dir.y * 0.3 * cl->bond;
+        }
+    }
   if (!h && cl->opt->highlight_sub == sub)
     {
       p = cw_scene_add (cl->scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);
@@ -110,20 +123,24 @@ place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double siz
   p = cw_scene_line (cl->scene, h ? CW_ROLE_HYDROGEN : CW_ROLE_SUB_BOND, h ? CW_INK_MUTED : CW_INK_BOND,
                      a.x, a.y, place.ex, place.ey, h ? 0.8 : 1.3);
   p->halo = TRUE;
+  p->halo_ink = cl->major ? CW_INK_PANEL : CW_INK_BACKGROUND;
   p->chair = cl->which;
   p->sub = sub;
   p->position = k + 1;
   p->axial = axial;
-  p = cw_label_add (cl->scene, &lt, &place, size, role, h ? CW_INK_MUTED : CW_INK_TEXT,
-                    !h && cl->opt->highlight_sub == sub);
-  p->chair = cl->which;
-  p->sub = sub;
-  p->position = k + 1;
-  p->axial = axial;
-  cw_placer_add_box (&cl->placer, &place.box);
+  if (show_label)
+    {
+      p = cw_label_add (cl->scene, &lt, &place, size, role, h ? CW_INK_MUTED : CW_INK_TEXT,
+                        !h && cl->opt->highlight_sub == sub);
+      p->chair = cl->which;
+      p->sub = sub;
+      p->position = k + 1;
+      p->axial = axial;
+      cw_placer_add_box (&cl->placer, &place.box);
+    }
   cw_placer_add_segment (&cl->placer, a.x, a.y, place.ex, place.ey);
   if (out != NULL)
-    *out = (SubPlace) { a, { place.ex, place.ey }, dir, hypot (place.ex - a.x, place.ey - a.y), TRUE };
+    *out = (SubPlace){ a, { place.ex, place.ey }, dir, hypot (place.ex - a.x, place.ey - a.y), TRUE };
   cw_label_text_clear (&lt);
 }
 
@@ -131,15 +148,15 @@ static void
 draw_substituents (ChairLayout *cl)
 {
   const CwChair *ch = &cl->an->chair[cl->which];
-  gboolean taken[6][2] = { { FALSE } }; /* [carbon][axial] */
+  gboolean       taken[6][2] = { { FALSE } }; /* [carbon][axial] */
 
   for (int n = 0; n < cl->mol->n_subs; n++)
     {
-      int i = cl->order[n];
+      int                  i = cl->order[n];
       const CwSubstituent *s = &cl->mol->subs[i];
-      int k = s->position - 1;
-      gboolean axial = ch->axial[i];
-      CwPoint dir = project_dir (cl, axial ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]);
+      int                  k = s->position - 1;
+      gboolean             axial = ch->axial[i];
+      CwPoint              dir = project_dir (cl, axial ? &cl->chair3d.axial[k] : &cl->chair3d.equatorial[k]);
 
       taken[k][axial] = TRUE;
       place_group (cl, k, dir, s->group->markup, LABEL_SIZE, 0.8 * cl->bond, CW_ROLE_SUB_LABEL, i, axial,
@@ -157,23 +174,23 @@ draw_substituents (ChairLayout *cl)
 static CwPoint
 along (const SubPlace *sp, double f)
 {
-  return (CwPoint) { sp->atom.x + sp->dir.x * sp->length * f, sp->atom.y + sp->dir.y * sp->length * f };
+  return (CwPoint){ sp->atom.x + sp->dir.x * sp->length * f, sp->atom.y + sp->dir.y * sp->length * f };
 }
 
 static void
 mark_term (ChairLayout *cl, const CwTerm *term, CwPoint centre)
 {
-  const SubPlace *a = &cl->sub[term->sub_a], *b = &cl->sub[term->sub_b];
-  gboolean syn = term->kind == CW_TERM_SYN_AXIAL;
-  CwPoint p = along (a, syn ? 0.75 : 0.6), q = along (b, syn ? 0.75 : 0.6);
-  CwPoint mid = { 0.5 * (p.x + q.x), 0.5 * (p.y + q.y) };
-  double ox = mid.x - centre.x, oy = mid.y - centre.y, on = hypot (ox, oy);
-  CwPoint pts[17];
+  const SubPlace  *a = &cl->sub[term->sub_a], *b = &cl->sub[term->sub_b];
+  gboolean         syn = term->kind == CW_TERM_SYN_AXIAL;
+  CwPoint          p = along (a, syn ? 0.75 : 0.6), q = along (b, syn ? 0.75 : 0.6);
+  CwPoint          mid = { 0.5 * (p.x + q.x), 0.5 * (p.y + q.y) };
+  double           ox = mid.x - centre.x, oy = mid.y - centre.y, on = hypot (ox, oy);
+  CwPoint          pts[17];
   g_autofree char *val = cw_render_format_energy (term->energy, cl->opt->unit);
   g_autofree char *markup = g_strdup_printf ("%s%s", term->energy > 0 ? "+" : "", val);
-  CwPoint cands[6];
-  CwPrim *prim;
-  double bulge = syn ? -0.22 * hypot (q.x - p.x, q.y - p.y) : 0;
+  CwPoint          cands[48];
+  CwPrim          *prim;
+  double           bulge = syn ? -0.22 * hypot (q.x - p.x, q.y - p.y) : 0;
 
   if (on < 1e-6)
     ox = 0, oy = -1, on = 1;
@@ -183,21 +200,25 @@ mark_term (ChairLayout *cl, const CwTerm *term, CwPoint centre)
   for (int i = 0; i <= 16; i++)
     {
       double t = i / 16.0, s = 4 * t * (1 - t);
-      pts[i] = (CwPoint) { p.x + (q.x - p.x) * t + ox * bulge * s, p.y + (q.y - p.y) * t + oy * bulge * s };
+      pts[i] = (CwPoint){ p.x + (q.x - p.x) * t + ox * bulge * s, p.y + (q.y - p.y) * t + oy * bulge * s };
     }
   prim = cw_scene_polyline (cl->scene, CW_ROLE_INTERACTION, syn ? CW_INK_STRAIN : CW_INK_GAUCHE, pts, 17,
                             1.3);
   prim->dash = syn ? 4.0 : 1.2;
   prim->chair = cl->which;
   prim->sub = term->sub_a;
-  for (int i = 0; i < 6; i++)
+  /* Beside the middle of the mark, away from the ring first, then further out, then along it. */
+  for (int i = 0; i < 48; i++)
     {
-      double d = 6 + 7 * (i / 2);
+      double d = 7 + 6 * ((i % 24) / 2);
       double side = (i % 2) ? -1 : 1;
-      cands[i] = (CwPoint) { pts[8].x + side * ox * d, pts[8].y + side * oy * d };
+      double along_t = i < 24 ? 0 : (i % 4 < 2 ? 12 : -12);
+      double lx = q.x - p.x, ly = q.y - p.y, ln = MAX (hypot (lx, ly), 1e-6);
+
+      cands[i] = (CwPoint){ pts[8].x + side * ox * d + along_t * lx / ln, pts[8].y + side * oy * d + along_t * ly / ln };
     }
   prim = cw_scene_text_free (cl->scene, CW_ROLE_INTERACTION_LABEL, syn ? CW_INK_STRAIN : CW_INK_GAUCHE,
-                             markup, MARK_SIZE, cands, 6, 0.5, 0.5);
+                             markup, MARK_SIZE, cands, 48, 0.5, 0.5);
   prim->chair = cl->which;
   prim->sub = term->sub_a;
   cw_placer_add_box (&cl->placer, &prim->box);
@@ -207,8 +228,9 @@ static void
 draw_chair_once (ChairLayout *cl, gboolean major)
 {
   const CwChair *ch = &cl->an->chair[cl->which];
-  CwPoint centre = { 0, 0 };
+  CwPoint        centre = { 0, 0 };
 
+  cl->major = major;
   cw_placer_init (&cl->placer);
   memset (cl->sub, 0, sizeof cl->sub);
   cl->failures = 0;
@@ -232,7 +254,7 @@ draw_chair_once (ChairLayout *cl, gboolean major)
 static CwScene *
 draw_chair (ChairLayout *cl, gboolean major, double width, double height)
 {
-  int n = cl->mol->n_subs, order[CW_MAX_SUBS], best_failures = G_MAXINT;
+  int      n = cl->mol->n_subs, order[CW_MAX_SUBS], best_failures = G_MAXINT;
   CwScene *best = NULL;
 
   for (int attempt = 0; attempt < n + 2 && best_failures > 0; attempt++)
@@ -285,15 +307,14 @@ equilibrium_arrows (CwScene *scene, double x0, double x1, double y)
 }
 
 static void
-captions (CwScene *scene, const CwAnalysis *an, const CwRenderOptions *opt, int c, double cx, double y,
-          gboolean major)
+captions (CwScene *scene, const CwAnalysis *an, const CwRenderOptions *opt, int c, double cx, double y, gboolean major)
 {
   g_autofree char *pop = cw_render_format_percent (an->pop[c]);
   g_autofree char *lo = cw_render_format_percent (an->pop_low[c]);
   g_autofree char *hi = cw_render_format_percent (an->pop_high[c]);
   g_autofree char *g = cw_render_format_energy (an->chair[c].energy, opt->unit);
   g_autofree char *title = NULL, *line2 = NULL, *line3 = NULL;
-  CwPrim *p;
+  CwPrim          *p;
 
   title = g_strdup_printf (major ? _("Chair %d (major)") : _("Chair %d"), c + 1);
   p = cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, title, CAPTION_SIZE + 1, major, cx, y, 0.5, 0);
@@ -313,8 +334,8 @@ captions (CwScene *scene, const CwAnalysis *an, const CwRenderOptions *opt, int 
 static void
 legend (CwScene *scene, const CwRenderOptions *opt, double y)
 {
-  double x = scene->width / 2 - 190;
-  CwPrim *p;
+  double           x = scene->width / 2 - 190;
+  CwPrim          *p;
   g_autofree char *units = g_strdup_printf (_("energies in %s"), cw_energy_unit_symbol (opt->unit));
 
   p = cw_scene_line (scene, CW_ROLE_LEGEND, CW_INK_STRAIN, x, y, x + 22, y, 1.3);
@@ -329,24 +350,23 @@ legend (CwScene *scene, const CwRenderOptions *opt, double y)
 }
 
 CwScene *
-cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt,
-                 double width, double height)
+cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
 {
-  CwScene *scene = cw_scene_new (width, height);
-  double span = MIN (width, 2 * height);
-  double bond = 0.105 * span;
-  double mid = 0.5 * width, gap, cy;
-  CwTextMetrics km, gm;
-  double cx[2];
-  gboolean decided = fabs (an->pop[0] - an->pop[1]) > 1e-6;
+  CwScene         *scene = cw_scene_new (width, height);
+  double           span = MIN (width, 2 * height);
+  double           bond = 0.105 * span;
+  double           mid = 0.5 * width, gap, cy;
+  CwTextMetrics    km, gm;
+  double           cx[2];
+  gboolean         decided = fabs (an->pop[0] - an->pop[1]) > 1e-6;
   g_autofree char *k = cw_render_format_k (an->K);
   g_autofree char *dg = cw_render_format_energy (an->delta_g, opt->unit);
   g_autofree char *sg = cw_render_format_energy (an->sigma, opt->unit);
   g_autofree char *kline = g_strdup_printf ("<i>K</i> = %s", k);
   g_autofree char *gline = g_strdup_printf ("Δ<i>G</i>° = %s ± %s", dg, sg);
-  CwBox bounds, cb[2];
-  CwScene *part[2];
-  double cap_y, top = G_MAXDOUBLE, bottom = -G_MAXDOUBLE;
+  CwBox            bounds, cb[2];
+  CwScene         *part[2];
+  double           cap_y, top = G_MAXDOUBLE, bottom = -G_MAXDOUBLE;
 
   cw_text_measure (kline, CAPTION_SIZE, FALSE, 0, 0, 0, &km);
   cw_text_measure (gline, CAPTION_SIZE - 1, FALSE, 0, 0, 0, &gm);
@@ -378,11 +398,11 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
   for (int c = 0; c < 2; c++)
     captions (scene, an, opt, c, cx[c], cap_y, decided && an->major == c);
   bounds = cw_scene_bounds (scene);
-  legend (scene, opt, MAX (height - 12, bounds.y + bounds.h + 16));
+  legend (scene, opt, bounds.y + bounds.h + 16);
   if (decided)
     {
       /* A faint panel behind the major chair, painted first; the caption says "major" too. */
-      CwPrim panel = { 0 };
+      CwPrim       panel = { 0 };
       const CwBox *b = &cb[an->major];
 
       panel.kind = CW_PRIM_RECT;
@@ -393,10 +413,9 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
       panel.x1 = MAX (cx[an->major] + b->x + b->w, cx[an->major] + 0.2 * span) + 8 - panel.x0;
       panel.y0 = 4;
       panel.y1 = bounds.y + bounds.h + 4 - panel.y0;
-      g_array_prepend_val (scene->prims, panel);
       panel.fill = TRUE;
-      g_array_index (scene->prims, CwPrim, 0).fill = TRUE;
+      g_array_prepend_val (scene->prims, panel);
     }
-  cw_scene_fit (scene, 6);
+  cw_scene_fit_tight (scene, 6);
   return scene;
 }

@@ -1,9 +1,8 @@
 #include "config.h"
 
-#include "cw-figures.h"
-
 #include <math.h>
 
+#include "cw-figures.h"
 #include "cw-label.h"
 #include "cw-render-private.h"
 
@@ -12,7 +11,7 @@ grow (CwBox *b, gboolean *any, double x, double y)
 {
   if (!*any)
     {
-      *b = (CwBox) { x, y, 0, 0 };
+      *b = (CwBox){ x, y, 0, 0 };
       *any = TRUE;
       return;
     }
@@ -21,49 +20,58 @@ grow (CwBox *b, gboolean *any, double x, double y)
 }
 
 CwBox
+cw_prim_bounds (const CwScene *scene, const CwPrim *p)
+{
+  CwBox    b = { 0, 0, 0, 0 };
+  gboolean any = FALSE;
+  double   r = 0.5 * MAX (p->line_width, p->wide) + (p->halo ? 2.0 : 0.0);
+
+  switch (p->kind)
+    {
+    case CW_PRIM_TEXT:
+      grow (&b, &any, p->box.x, p->box.y);
+      grow (&b, &any, p->box.x + p->box.w, p->box.y + p->box.h);
+      break;
+    case CW_PRIM_RECT:
+      grow (&b, &any, p->x0, p->y0);
+      grow (&b, &any, p->x0 + p->x1, p->y0 + p->y1);
+      break;
+    case CW_PRIM_MARKER:
+      grow (&b, &any, p->x0 - r, p->y0 - r);
+      grow (&b, &any, p->x0 + r, p->y0 + r);
+      break;
+    case CW_PRIM_POLYLINE:
+    case CW_PRIM_POLYGON:
+      for (guint k = 0; k < p->n_points; k++)
+        {
+          CwPoint q = g_array_index (scene->points, CwPoint, p->first_point + k);
+          grow (&b, &any, q.x - r, q.y - r);
+          grow (&b, &any, q.x + r, q.y + r);
+        }
+      break;
+    case CW_PRIM_LINE:
+    case CW_PRIM_WEDGE:
+    case CW_PRIM_HASH:
+    default:
+      grow (&b, &any, p->x0 - r, p->y0 - r);
+      grow (&b, &any, p->x1 + r, p->y1 + r);
+      grow (&b, &any, p->x0 + r, p->y0 + r);
+      grow (&b, &any, p->x1 - r, p->y1 - r);
+      break;
+    }
+  return b;
+}
+
+CwBox
 cw_scene_bounds (const CwScene *scene)
 {
   CwBox b = { 0, 0, 0, 0 };
-  gboolean any = FALSE;
 
   for (guint i = 0; i < scene->prims->len; i++)
     {
-      const CwPrim *p = &g_array_index (scene->prims, CwPrim, i);
-      double r = 0.5 * MAX (p->line_width, p->wide);
+      CwBox pb = cw_prim_bounds (scene, &g_array_index (scene->prims, CwPrim, i));
 
-      switch (p->kind)
-        {
-        case CW_PRIM_TEXT:
-          grow (&b, &any, p->box.x, p->box.y);
-          grow (&b, &any, p->box.x + p->box.w, p->box.y + p->box.h);
-          break;
-        case CW_PRIM_RECT:
-          grow (&b, &any, p->x0, p->y0);
-          grow (&b, &any, p->x0 + p->x1, p->y0 + p->y1);
-          break;
-        case CW_PRIM_MARKER:
-          grow (&b, &any, p->x0 - r, p->y0 - r);
-          grow (&b, &any, p->x0 + r, p->y0 + r);
-          break;
-        case CW_PRIM_POLYLINE:
-        case CW_PRIM_POLYGON:
-          for (guint k = 0; k < p->n_points; k++)
-            {
-              CwPoint q = g_array_index (scene->points, CwPoint, p->first_point + k);
-              grow (&b, &any, q.x, q.y);
-            }
-          break;
-        case CW_PRIM_LINE:
-        case CW_PRIM_WEDGE:
-        case CW_PRIM_HASH:
-          grow (&b, &any, p->x0 - r, p->y0 - r);
-          grow (&b, &any, p->x1 + r, p->y1 + r);
-          grow (&b, &any, p->x0 + r, p->y0 + r);
-          grow (&b, &any, p->x1 - r, p->y1 - r);
-          break;
-        default:
-          break;
-        }
+      b = i == 0 ? pb : cw_box_union (&b, &pb);
     }
   return b;
 }
@@ -71,7 +79,7 @@ cw_scene_bounds (const CwScene *scene)
 void
 cw_scene_fit (CwScene *scene, double margin)
 {
-  CwBox b = cw_scene_bounds (scene);
+  CwBox  b = cw_scene_bounds (scene);
   double w = b.w + 2 * margin, h = b.h + 2 * margin;
   double cx = b.x + 0.5 * b.w, cy = b.y + 0.5 * b.h;
 
@@ -88,6 +96,17 @@ cw_scene_fit (CwScene *scene, double margin)
 }
 
 void
+cw_scene_fit_tight (CwScene *scene, double margin)
+{
+  CwBox b = cw_scene_bounds (scene);
+
+  scene->origin_x = b.x - margin;
+  scene->origin_y = b.y - margin;
+  scene->width = b.w + 2 * margin;
+  scene->height = b.h + 2 * margin;
+}
+
+void
 cw_scene_message (CwScene *scene, const char *text)
 {
   g_autofree char *esc = g_markup_escape_text (text, -1);
@@ -96,46 +115,57 @@ cw_scene_message (CwScene *scene, const char *text)
                     scene->width / 2, scene->height / 2, 0.5, 0.5);
 }
 
-static gboolean
-text_fits (const CwScene *scene, const CwBox *box)
+static int
+text_hits (const CwScene *scene, const CwBox *box)
 {
-  if (cw_scene_box_hits_text (scene, box, 1.0, -1))
-    return FALSE;
+  int hits = 0;
+
   for (guint i = 0; i < scene->prims->len; i++)
     {
       const CwPrim *p = &g_array_index (scene->prims, CwPrim, i);
 
-      if ((p->kind == CW_PRIM_LINE || p->kind == CW_PRIM_WEDGE || p->kind == CW_PRIM_HASH) &&
-          (p->role == CW_ROLE_RING_BOND || p->role == CW_ROLE_SUB_BOND || p->role == CW_ROLE_HYDROGEN) &&
-          cw_segment_hits_box (p->x0, p->y0, p->x1, p->y1, box))
-        return FALSE;
+      /* Text on text is far worse than text across a line. */
+      if (p->kind == CW_PRIM_TEXT)
+        hits += 100 * cw_box_overlap (box, &p->box, 1.0);
+      else if ((p->kind == CW_PRIM_LINE || p->kind == CW_PRIM_WEDGE || p->kind == CW_PRIM_HASH) &&
+               (p->role == CW_ROLE_RING_BOND || p->role == CW_ROLE_SUB_BOND || p->role == CW_ROLE_HYDROGEN))
+        hits += cw_segment_hits_box (p->x0, p->y0, p->x1, p->y1, box);
+      else if (p->kind == CW_PRIM_POLYLINE && p->role == CW_ROLE_INTERACTION)
+        for (guint k = 0; k + 1 < p->n_points; k++)
+          {
+            CwPoint a = g_array_index (scene->points, CwPoint, p->first_point + k);
+            CwPoint b = g_array_index (scene->points, CwPoint, p->first_point + k + 1);
+            hits += cw_segment_hits_box (a.x, a.y, b.x, b.y, box);
+          }
     }
-  return TRUE;
+  return hits;
 }
 
 CwPrim *
-cw_scene_text_free (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                    const CwPoint *cands, guint n_cands, double ax, double ay)
+cw_scene_text_free (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, const CwPoint *cands, guint n_cands, double ax, double ay)
 {
   CwTextMetrics m;
-  guint pick = 0;
-  CwPrim *p;
+  guint         pick = 0;
+  CwPrim       *p;
+
+  int best = G_MAXINT;
 
   cw_text_measure (markup, size, FALSE, 0, 0, 0, &m);
-  for (guint i = 0; i < n_cands; i++)
+  for (guint i = 0; i < n_cands && best > 0; i++)
     {
       CwBox box = { cands[i].x - ax * m.w, cands[i].y - ay * m.h, m.w, m.h };
+      int   hits = text_hits (scene, &box);
 
-      if (text_fits (scene, &box))
+      if (hits < best)
         {
+          best = hits;
           pick = i;
-          break;
         }
     }
   p = cw_scene_add (scene, CW_PRIM_TEXT, role, ink);
   p->markup = g_strdup (markup);
   p->size = size;
-  p->box = (CwBox) { cands[pick].x - ax * m.w, cands[pick].y - ay * m.h, m.w, m.h };
+  p->box = (CwBox){ cands[pick].x - ax * m.w, cands[pick].y - ay * m.h, m.w, m.h };
   return p;
 }
 
@@ -171,7 +201,7 @@ int
 cw_placer_count_hits (const CwPlacer *pl, const CwBox *box, double x0, double y0, double x1, double y1)
 {
   CwBox grown = { box->x - 1.5, box->y - 1.5, box->w + 3, box->h + 3 };
-  int hits = 0;
+  int   hits = 0;
 
   for (guint i = 0; i < pl->labels->len; i++)
     {
@@ -196,10 +226,9 @@ cw_placer_collides (const CwPlacer *pl, const CwBox *box, double x0, double y0, 
 }
 
 int
-cw_placer_place_label (const CwPlacer *pl, const char *markup, double size, double px, double py,
-                       double dx, double dy, double base, CwLabelPlace *place, CwLabelText *lt)
+cw_placer_place_label (const CwPlacer *pl, const char *markup, double size, double px, double py, double dx, double dy, double base, CwLabelPlace *place, CwLabelText *lt)
 {
-  int best = G_MAXINT;
+  int          best = G_MAXINT;
   CwLabelPlace cand;
 
   /* Longer bonds first (up to about twice as long), then shorter ones; the first clear spot wins,
@@ -207,7 +236,7 @@ cw_placer_place_label (const CwPlacer *pl, const char *markup, double size, doub
   for (int t = 0; t < 31 && best > 0; t++)
     {
       double len = t < 26 ? base + 4.0 * t : base * (0.85 - 0.1 * (t - 26));
-      int hits;
+      int    hits;
 
       cw_label_text_clear (lt);
       cw_label_place (markup, size, px, py, dx, dy, len, &cand, lt);

@@ -12,16 +12,15 @@
 #define N_STATIONS 7
 
 static const char *const station_names[N_STATIONS] = {
-  N_("chair 1"), N_("half-chair"), N_("twist-boat"), N_("boat"), N_("twist-boat"), N_("half-chair"), N_("chair 2")
-};
+  N_("chair 1"), N_("half-chair"), N_("twist-boat"), N_("boat"), N_("twist-boat"), N_("half-chair"), N_("chair 2") };
 
 /* Levels in kcal/mol above the lower chair. */
 static void
 levels (const CwData *data, const CwAnalysis *an, double g[N_STATIONS])
 {
   const CwRingEnergetics *ring = data ? cw_interaction_table_get_ring (data->interactions) : NULL;
-  double gmin = MIN (an->chair[0].energy, an->chair[1].energy);
-  double boat_above_tb = ring ? ring->boat.g - ring->twist_boat.g : 0.0;
+  double                  gmin = MIN (an->chair[0].energy, an->chair[1].energy);
+  double                  boat_above_tb = ring ? ring->boat.g - ring->twist_boat.g : 0.0;
 
   g[0] = an->chair[0].energy - gmin;
   g[6] = an->chair[1].energy - gmin;
@@ -35,7 +34,7 @@ levels (const CwData *data, const CwAnalysis *an, double g[N_STATIONS])
 static double
 curve (const double g[N_STATIONS], double s)
 {
-  int i = CLAMP ((int) floor (s), 0, N_STATIONS - 2);
+  int    i = CLAMP ((int) floor (s), 0, N_STATIONS - 2);
   double t = s - i;
   /* Cosine easing: flat at every station, so minima and maxima sit on the stations. */
   double w = 0.5 * (1 - cos (G_PI * t));
@@ -47,19 +46,18 @@ static void
 level_label (CwScene *scene, const CwPlot *plot, double x, double g, const CwRenderOptions *opt, gboolean below)
 {
   g_autofree char *v = cw_render_format_value (g, opt->unit);
-  double px = cw_plot_x (plot, x), py = cw_plot_y (plot, g);
+  double           px = cw_plot_x (plot, x), py = cw_plot_y (plot, g);
 
   cw_scene_line (scene, CW_ROLE_LEVEL, CW_INK_TEXT, px - 14, py, px + 14, py, 2.0);
   cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, v, 9, FALSE, px, below ? py + 4 : py - 4, 0.5, below ? 0 : 1);
 }
 
 /* A double arrow between two levels at x, with dotted guides from the stations it refers to. */
-static void
-vertical_arrow (CwScene *scene, const CwPlot *plot, double x, double ga, double gb, double sa, double sb,
-                const char *markup)
+/* Returns the right edge of its label, so the next arrow can stand clear of it. */
+static double
+vertical_arrow (CwScene *scene, const CwPlot *plot, double px, double ga, double gb, double sa, double sb, const char *markup)
 {
-  double px = cw_plot_x (plot, x);
-  double ya = cw_plot_y (plot, ga), yb = cw_plot_y (plot, gb);
+  double  ya = cw_plot_y (plot, ga), yb = cw_plot_y (plot, gb);
   CwPrim *p;
 
   p = cw_scene_line (scene, CW_ROLE_LEVEL, CW_INK_MUTED, cw_plot_x (plot, sa) + 15, ya, px + 3, ya, 0.7);
@@ -68,24 +66,25 @@ vertical_arrow (CwScene *scene, const CwPlot *plot, double x, double ga, double 
   p->dash = 1.0;
   if (fabs (ya - yb) > 9)
     cw_scene_arrow (scene, CW_ROLE_ARROW, CW_INK_TEXT, px, ya, px, yb, 1.0, TRUE);
-  cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, markup, 9.5, FALSE, px + 5, 0.5 * (ya + yb), 0.0, 0.5);
+  p = cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, markup, 9.5, FALSE, px + 5, 0.5 * (ya + yb), 0.0, 0.5);
+  return p->box.x + p->box.w;
 }
 
 CwScene *
-cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an,
-                  const CwRenderOptions *opt, double width, double height)
+cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
 {
-  CwScene *scene = cw_scene_new (width, height);
-  double g[N_STATIONS], top = 0, step;
-  CwPlot plot;
-  CwPoint pts[241];
+  CwScene         *scene = cw_scene_new (width, height);
+  double           g[N_STATIONS], top = 0, step;
+  CwPlot           plot;
+  CwPoint          pts[241];
   g_autofree char *title = g_strdup_printf (_("G relative to the more stable chair, %s"),
-                                            cw_energy_unit_symbol (opt->unit));
+                                               cw_energy_unit_symbol (opt->unit));
   g_autofree char *dg = cw_render_format_energy (an->delta_g, opt->unit);
   g_autofree char *bar = cw_render_format_energy (an->barrier, opt->unit);
   g_autofree char *dg_markup = g_strdup_printf ("Δ<i>G</i>° = %s", dg);
   g_autofree char *bar_markup = g_strdup_printf ("Δ<i>G</i><sup>‡</sup> = %s", bar);
-  int low = an->chair[0].energy <= an->chair[1].energy ? 0 : 6;
+  int              low = an->chair[0].energy <= an->chair[1].energy ? 0 : 6;
+  double           right;
 
   levels (data, an, g);
   for (int i = 0; i < N_STATIONS; i++)
@@ -95,7 +94,7 @@ cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *a
     g[i] = cw_energy_from_kcal (g[i], opt->unit);
   top = cw_energy_from_kcal (top, opt->unit);
   step = cw_nice_step (top * 1.15, 5);
-  plot.area = (CwBox) { 56, 30, width - 56 - 16, height - 30 - 44 };
+  plot.area = (CwBox){ 56, 30, width - 56 - 16, height - 30 - 44 };
   plot.x0 = -0.5;
   plot.x1 = N_STATIONS + 1.3; /* room on the right for the two arrows */
   plot.y0 = 0;
@@ -106,20 +105,20 @@ cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *a
   for (int i = 0; i < 241; i++)
     {
       double s = (N_STATIONS - 1) * i / 240.0;
-      pts[i] = (CwPoint) { cw_plot_x (&plot, s), cw_plot_y (&plot, curve (g, s)) };
+      pts[i] = (CwPoint){ cw_plot_x (&plot, s), cw_plot_y (&plot, curve (g, s)) };
     }
   cw_scene_polyline (scene, CW_ROLE_CURVE, CW_INK_SERIES_1, pts, 241, 2.0);
   for (int i = 0; i < N_STATIONS; i++)
     {
       gboolean maximum = i == 1 || i == 3 || i == 5;
-      double px = cw_plot_x (&plot, i);
+      double   px = cw_plot_x (&plot, i);
 
       level_label (scene, &plot, i, g[i], opt, !maximum && i != 0 && i != 6);
-      cw_scene_text_at (scene, CW_ROLE_AXIS, CW_INK_TEXT, _(station_names[i]), 9, i == 0 || i == 6,
-                        px, plot.area.y + plot.area.h + 6, 0.5, 0);
+      cw_scene_text_at (scene, CW_ROLE_AXIS, CW_INK_TEXT, _(station_names[i]), 9, i == 0 || i == 6, px, plot.area.y + plot.area.h + 6, 0.5, 0);
     }
   /* Beyond the last station: the barrier from the lower chair, then ΔG° between the chairs. */
-  vertical_arrow (scene, &plot, N_STATIONS - 0.5, g[low], g[5], low, 5, bar_markup);
-  vertical_arrow (scene, &plot, N_STATIONS + 0.45, g[0], g[6], 0, 6, dg_markup);
+  right = vertical_arrow (scene, &plot, cw_plot_x (&plot, N_STATIONS - 0.5), g[low], g[5], low, 5, bar_markup);
+  vertical_arrow (scene, &plot, MAX (cw_plot_x (&plot, N_STATIONS + 0.2), right + 8), g[0], g[6], 0, 6, dg_markup);
+  cw_scene_fit (scene, 4);
   return scene;
 }

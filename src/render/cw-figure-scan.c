@@ -35,8 +35,7 @@ cw_scan_three_state (const CwAnalysis *an, double pop[3])
 }
 
 gboolean
-cw_scan_compute (const CwData *data, const CwMolecule *mol, CwSolvent solvent,
-                 gboolean with_twist_boat, double t0, double t1, guint n, CwScanPoint *points)
+cw_scan_compute (const CwData *data, const CwMolecule *mol, CwSolvent solvent, gboolean with_twist_boat, double t0, double t1, guint n, CwScanPoint *points)
 {
   CwAnalysis an;
 
@@ -61,17 +60,17 @@ cw_scan_compute (const CwData *data, const CwMolecule *mol, CwSolvent solvent,
 
 typedef struct
 {
-  CwInk ink;
-  double dash;
+  CwInk         ink;
+  double        dash;
   CwMarkerShape marker;
-  const char *name;
+  const char   *name;
 } Series;
 
 static const Series series[3] = {
   { CW_INK_SERIES_1, 0, CW_MARKER_CIRCLE, N_("chair 1") },
-  { CW_INK_SERIES_2, 5.0, CW_MARKER_SQUARE, N_("chair 2") },
-  { CW_INK_SERIES_3, 1.2, CW_MARKER_TRIANGLE, N_("twist-boat") },
-};
+    { CW_INK_SERIES_2, 5.0, CW_MARKER_SQUARE, N_("chair 2") },
+      { CW_INK_SERIES_3, 1.2, CW_MARKER_TRIANGLE, N_("twist-boat") },
+    };
 
 static CwPrim *
 marker (CwScene *scene, int s, double x, double y, CwRole role)
@@ -107,7 +106,7 @@ draw_series (CwScene *scene, const CwPlot *plot, const CwScanPoint *pts, guint n
   CwPrim *p;
 
   for (guint i = 0; i < n; i++)
-    line[i] = (CwPoint) { cw_plot_x (plot, pts[i].t), cw_plot_y (plot, 100 * pts[i].pop[s]) };
+    line[i] = (CwPoint){ cw_plot_x (plot, pts[i].t), cw_plot_y (plot, 100 * pts[i].pop[s]) };
   p = cw_scene_polyline (scene, CW_ROLE_CURVE, series[s].ink, line, n, 2.0);
   p->dash = series[s].dash;
   /* Markers along the curve, offset per series so they do not sit on each other. */
@@ -116,15 +115,14 @@ draw_series (CwScene *scene, const CwPlot *plot, const CwScanPoint *pts, guint n
 }
 
 static void
-chosen_temperature (CwScene *scene, const CwPlot *plot, const CwAnalysis *an, const double pop[3],
-                    int n_series, const CwRenderOptions *opt)
+chosen_temperature (CwScene *scene, const CwPlot *plot, const CwAnalysis *an, const double pop[3], int n_series, const CwRenderOptions *opt)
 {
-  double x = cw_plot_x (plot, an->temperature);
+  double           x = cw_plot_x (plot, an->temperature);
   g_autofree char *t = cw_format_temperature (an->temperature, opt->temperature_unit);
   g_autofree char *esc = g_markup_escape_text (t, -1);
-  CwPrim *p = cw_scene_line (scene, CW_ROLE_MARKER, CW_INK_MUTED, x, plot->area.y, x, plot->area.y + plot->area.h, 1.0);
-  double last_y = -G_MAXDOUBLE;
-  int order[3] = { 0, 1, 2 };
+  CwPrim          *p = cw_scene_line (scene, CW_ROLE_MARKER, CW_INK_MUTED, x, plot->area.y, x, plot->area.y + plot->area.h, 1.0);
+  double           last_y = -G_MAXDOUBLE;
+  int              order[3] = { 0, 1, 2 };
 
   p->dash = 3.0;
   cw_scene_text_at (scene, CW_ROLE_MARKER, CW_INK_TEXT, esc, 9.5, TRUE, x, plot->area.y - 3, 0.5, 1);
@@ -139,12 +137,12 @@ chosen_temperature (CwScene *scene, const CwPlot *plot, const CwAnalysis *an, co
         }
   for (int i = 0; i < n_series; i++)
     {
-      int s = order[i];
-      double y = cw_plot_y (plot, 100 * pop[s]);
+      int              s = order[i];
+      double           y = cw_plot_y (plot, 100 * pop[s]);
       g_autofree char *v = cw_render_format_percent (pop[s]);
       g_autofree char *lab = g_strdup_printf ("%s %%", v);
-      gboolean right = x < plot->area.x + plot->area.w - 60;
-      double ly = MAX (y, last_y + 12);
+      gboolean         right = x < plot->area.x + plot->area.w - 60;
+      double           ly = MAX (y, last_y + 12);
 
       p = marker (scene, s, x, y, CW_ROLE_MARKER);
       p->wide = 8;
@@ -166,19 +164,18 @@ chosen_temperature (CwScene *scene, const CwPlot *plot, const CwAnalysis *an, co
 }
 
 CwScene *
-cw_scan_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an,
-               const CwRenderOptions *opt, double width, double height)
+cw_scan_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
 {
-  CwScene *scene = cw_scene_new (width, height);
-  gboolean tb = cw_scan_wants_twist_boat (an);
-  int n_series = tb ? 3 : 2;
-  double t = an->temperature;
-  double t0 = MAX (100.0, MIN (180.0, t - 60)), t1 = MIN (CW_T_MAX, MAX (420.0, t + 60));
-  double xoff = opt->temperature_unit == CW_TUNIT_CELSIUS ? -CW_ZERO_C : 0;
-  CwScanPoint pts[N_SCAN];
-  double pop[3];
-  CwPlot plot;
-  const char *tunit = opt->temperature_unit == CW_TUNIT_CELSIUS ? "°C" : "K";
+  CwScene         *scene = cw_scene_new (width, height);
+  gboolean         tb = cw_scan_wants_twist_boat (an);
+  int              n_series = tb ? 3 : 2;
+  double           t = an->temperature;
+  double           t0 = MAX (100.0, MIN (180.0, t - 60)), t1 = MIN (CW_T_MAX, MAX (420.0, t + 60));
+  double           xoff = opt->temperature_unit == CW_TUNIT_CELSIUS ? -CW_ZERO_C : 0;
+  CwScanPoint      pts[N_SCAN];
+  double           pop[3];
+  CwPlot           plot;
+  const char      *tunit = opt->temperature_unit == CW_TUNIT_CELSIUS ? "°C" : "K";
   g_autofree char *xtitle = g_strdup_printf (_("temperature, %s"), tunit);
 
   if (!cw_scan_compute (data, mol, an->solvent, tb, t0, t1, N_SCAN, pts))
@@ -186,7 +183,7 @@ cw_scan_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an,
       cw_scene_message (scene, _("The temperature scan could not be computed"));
       return scene;
     }
-  plot.area = (CwBox) { 52, 26, width - 52 - 22, height - 26 - 70 };
+  plot.area = (CwBox){ 52, 26, width - 52 - 22, height - 26 - 70 };
   plot.x0 = t0;
   plot.x1 = t1;
   plot.y0 = 0;
@@ -203,5 +200,6 @@ cw_scan_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an,
     pop[0] = an->pop[0], pop[1] = an->pop[1], pop[2] = 0;
   chosen_temperature (scene, &plot, an, pop, n_series, opt);
   legend (scene, n_series, plot.area.x, height - 12);
+  cw_scene_fit (scene, 4);
   return scene;
 }

@@ -25,7 +25,7 @@ read_tag (const char *p, const char *tag, GString *inner)
 {
   g_autofree char *open = g_strdup_printf ("<%s>", tag);
   g_autofree char *close = g_strdup_printf ("</%s>", tag);
-  const char *end;
+  const char      *end;
 
   if (!starts_with (p, open))
     return NULL;
@@ -177,11 +177,10 @@ cw_label_text_clear (CwLabelText *lt)
 }
 
 void
-cw_label_place (const char *markup, double size, double px, double py, double dx, double dy,
-                double length, CwLabelPlace *out, CwLabelText *text_out)
+cw_label_place (const char *markup, double size, double px, double py, double dx, double dy, double length, CwLabelPlace *out, CwLabelText *text_out)
 {
   CwTextMetrics m;
-  double hw, hh, t;
+  double        hw, hh, t;
   /* Cap height of the font, about 0.73 em: the atom's centre is half of it above the baseline. */
   double cap = 0.73 * size;
   double pad = 0.18 * size;
@@ -204,8 +203,7 @@ cw_label_place (const char *markup, double size, double px, double py, double dx
 }
 
 CwPrim *
-cw_label_add (CwScene *scene, const CwLabelText *lt, const CwLabelPlace *place, double size,
-              CwRole role, CwInk ink, gboolean bold)
+cw_label_add (CwScene *scene, const CwLabelText *lt, const CwLabelPlace *place, double size, CwRole role, CwInk ink, gboolean bold)
 {
   CwPrim *p = cw_scene_add (scene, CW_PRIM_TEXT, role, ink);
 

@@ -12,11 +12,11 @@ static const double light[CW_N_INKS][3] = {
   [CW_INK_BOND] = { 0.0, 0.0, 0.0 },
   [CW_INK_MUTED] = { 0.36, 0.36, 0.36 },
   [CW_INK_GRID] = { 0.84, 0.84, 0.84 },
-  [CW_INK_SERIES_1] = { 0.0, 0.447, 0.698 },   /* blue */
-  [CW_INK_SERIES_2] = { 0.835, 0.369, 0.0 },   /* vermilion */
-  [CW_INK_SERIES_3] = { 0.0, 0.620, 0.451 },   /* bluish green */
-  [CW_INK_STRAIN] = { 0.835, 0.369, 0.0 },     /* vermilion */
-  [CW_INK_GAUCHE] = { 0.0, 0.447, 0.698 },     /* blue */
+  [CW_INK_SERIES_1] = { 0.0, 0.447, 0.698 },    /* blue */
+  [CW_INK_SERIES_2] = { 0.835, 0.369, 0.0 },    /* vermilion */
+  [CW_INK_SERIES_3] = { 0.0, 0.620, 0.451 },    /* bluish green */
+  [CW_INK_STRAIN] = { 0.835, 0.369, 0.0 },      /* vermilion */
+  [CW_INK_GAUCHE] = { 0.0, 0.447, 0.698 },      /* blue */
   [CW_INK_HIGHLIGHT] = { 0.941, 0.894, 0.259 }, /* yellow, under text only */
   [CW_INK_PANEL] = { 0.945, 0.957, 0.973 },
 };
@@ -171,7 +171,7 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
         {
           /* Start the margin a little away from the line's own atom, which it must not erase. */
           double f = 0.22;
-          set_ink (cr, CW_INK_BACKGROUND, is_dark);
+          set_ink (cr, p->halo_ink, is_dark);
           cairo_set_line_width (cr, p->line_width + 4.0);
           cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
           cairo_move_to (cr, p->x0 + (p->x1 - p->x0) * f, p->y0 + (p->y1 - p->y0) * f);
@@ -220,8 +220,18 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
 void
 cw_scene_paint (const CwScene *scene, cairo_t *cr, gboolean is_dark)
 {
+  double cx0, cy0, cx1, cy1;
+  CwBox  clip;
+
+  /* Skip what falls outside the clip: a PNG is painted band by band. */
+  cairo_clip_extents (cr, &cx0, &cy0, &cx1, &cy1);
+  clip = (CwBox){ cx0 - 1, cy0 - 1, cx1 - cx0 + 2, cy1 - cy0 + 2 };
   for (guint i = 0; i < scene->prims->len; i++)
     {
+      CwBox b = cw_prim_bounds (scene, &g_array_index (scene->prims, CwPrim, i));
+
+      if (!cw_box_overlap (&b, &clip, 0))
+        continue;
       cairo_save (cr);
       paint_prim (cr, scene, &g_array_index (scene->prims, CwPrim, i), is_dark);
       cairo_restore (cr);

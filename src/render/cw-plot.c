@@ -40,7 +40,7 @@ cw_nice_step (double range, int target)
 static char *
 tick_label (double v, double step)
 {
-  int decimals = step >= 1 ? 0 : (int) ceil (-log10 (step) - 1e-9);
+  int              decimals = step >= 1 ? 0 : (int) ceil (-log10 (step) - 1e-9);
   g_autofree char *s = g_strdup_printf ("%.*f", decimals, fabs (v) < step * 1e-6 ? 0.0 : v);
 
   if (s[0] == '-')
@@ -55,7 +55,7 @@ cw_plot_axes (CwScene *scene, const CwPlot *plot, double xstep, double ystep, do
 
   for (double v = ceil (plot->y0 / ystep - 1e-9) * ystep; v <= plot->y1 + 1e-9; v += ystep)
     {
-      double y = cw_plot_y (plot, v);
+      double           y = cw_plot_y (plot, v);
       g_autofree char *lab = tick_label (v, ystep);
 
       cw_scene_line (scene, CW_ROLE_AXIS, CW_INK_GRID, a->x, y, a->x + a->w, y, 0.6);
@@ -65,7 +65,7 @@ cw_plot_axes (CwScene *scene, const CwPlot *plot, double xstep, double ystep, do
   if (xstep > 0)
     for (double d = ceil ((plot->x0 + xoffset) / xstep - 1e-9) * xstep; d - xoffset <= plot->x1 + 1e-9; d += xstep)
       {
-        double x = cw_plot_x (plot, d - xoffset);
+        double           x = cw_plot_x (plot, d - xoffset);
         g_autofree char *lab = tick_label (d, xstep);
 
         cw_scene_line (scene, CW_ROLE_AXIS, CW_INK_GRID, x, a->y, x, a->y + a->h, 0.6);

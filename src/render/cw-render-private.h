@@ -28,21 +28,27 @@ char *cw_render_format_value (double value, CwEnergyUnit unit); /* already in un
 char *cw_render_format_percent (double fraction);
 char *cw_render_format_k (double K);
 
+/* Background, then the scene scaled uniformly and centred in (0, 0, width, height). */
+void cw_render_paint_scene (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height);
+
 /* Natural (design) size of a figure in points. */
 void cw_render_figure_size (CwFigure fig, double *width, double *height);
 
 /* Prepares a figure's scene for a box of this many user units. */
-CwScene *cw_render_build_figure (CwFigure fig,
-                                 const CwData *data,
-                                 const CwMolecule *mol,
-                                 const CwAnalysis *an,
+CwScene *cw_render_build_figure (CwFigure               fig,
+                                 const CwData          *data,
+                                 const CwMolecule      *mol,
+                                 const CwAnalysis      *an,
                                  const CwRenderOptions *opt,
-                                 double width,
-                                 double height);
+                                 double                 width,
+                                 double                 height);
 
 /* Atomic file output: write to a temporary file beside path, rename on success. */
 typedef gboolean (*CwWriteFunc) (const char *tmp_path, gpointer user_data, GError **error);
 gboolean cw_render_write_atomic (const char *path, CwWriteFunc write, gpointer user_data, GError **error);
+
+/* Paints the scene on white into a PNG of width × height points at dpi (cw-png.c). */
+gboolean cw_render_write_png_scene (const CwScene *scene, double width, double height, double dpi, const char *path, GError **error);
 
 /* Analysis of a document at its own conditions. */
 gboolean cw_render_analyze_document (const CwData *data, const CwDocument *doc, CwAnalysis *an, GError **error);

@@ -110,7 +110,7 @@ cw_render_format_k (double K)
     return g_strdup ("∞");
   if (K != 0 && (K < 0.01 || K >= 1000))
     {
-      int e = (int) floor (log10 (K));
+      int    e = (int) floor (log10 (K));
       double m = K / pow (10, e);
       return g_strdup_printf ("%.2f × 10<sup>%s%d</sup>", m, e < 0 ? "−" : "", abs (e));
     }
@@ -118,13 +118,13 @@ cw_render_format_k (double K)
 }
 
 CwScene *
-cw_render_build_figure (CwFigure fig,
-                        const CwData *data,
-                        const CwMolecule *mol,
-                        const CwAnalysis *an,
+cw_render_build_figure (CwFigure               fig,
+                        const CwData          *data,
+                        const CwMolecule      *mol,
+                        const CwAnalysis      *an,
                         const CwRenderOptions *opt,
-                        double width,
-                        double height)
+                        double                 width,
+                        double                 height)
 {
   CwScene *scene;
 
@@ -149,11 +149,9 @@ cw_render_build_figure (CwFigure fig,
 }
 
 void
-cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol,
-                  const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
+cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
 {
   double w0, h0, s;
-  double bg[3];
   g_autoptr (CwScene) scene = NULL;
 
   g_return_if_fail (cr != NULL && mol != NULL && opt != NULL);
@@ -165,8 +163,16 @@ cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecul
   s = MIN (width / w0, height / h0);
   scene = cw_render_build_figure (fig, data, mol, an, opt, width / s, height / s);
 
+  cw_render_paint_scene (cr, scene, opt->dark, width, height);
+}
+
+void
+cw_render_paint_scene (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height)
+{
+  double bg[3], s;
+
   cairo_save (cr);
-  cw_palette_get (CW_INK_BACKGROUND, opt->dark, bg);
+  cw_palette_get (CW_INK_BACKGROUND, dark, bg);
   cairo_set_source_rgb (cr, bg[0], bg[1], bg[2]);
   cairo_rectangle (cr, 0, 0, width, height);
   cairo_fill (cr);
@@ -174,7 +180,7 @@ cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecul
   cairo_translate (cr, 0.5 * (width - s * scene->width), 0.5 * (height - s * scene->height));
   cairo_scale (cr, s, s);
   cairo_translate (cr, -scene->origin_x, -scene->origin_y);
-  cw_scene_paint (scene, cr, opt->dark);
+  cw_scene_paint (scene, cr, dark);
   cairo_restore (cr);
 }
 

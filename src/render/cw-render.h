@@ -10,20 +10,20 @@ G_BEGIN_DECLS
 
 typedef enum
 {
-  CW_RENDER_ERROR_FORMAT,   /* unknown file extension or paper size */
-  CW_RENDER_ERROR_IO,       /* the file could not be written */
-  CW_RENDER_ERROR_DRAW,     /* Cairo reported an error */
-  CW_RENDER_ERROR_ANALYSIS  /* the document could not be analysed */
+  CW_RENDER_ERROR_FORMAT,  /* unknown file extension or paper size */
+  CW_RENDER_ERROR_IO,      /* the file could not be written */
+  CW_RENDER_ERROR_DRAW,    /* Cairo reported an error */
+  CW_RENDER_ERROR_ANALYSIS /* the document could not be analysed */
 } CwRenderError;
 
 GQuark cw_render_error_quark (void);
 
 typedef struct
 {
-  CwEnergyUnit unit;
-  gboolean show_hydrogens;
-  gboolean dark;          /* screen only; exports always light */
-  int highlight_sub;      /* -1 none */
+  CwEnergyUnit      unit;
+  gboolean          show_hydrogens;
+  gboolean          dark;             /* screen only; exports always light */
+  int               highlight_sub;    /* -1 none */
   CwTemperatureUnit temperature_unit; /* axis of the scan figure */
 } CwRenderOptions;
 

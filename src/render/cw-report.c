@@ -16,8 +16,8 @@
 
 typedef struct
 {
-  CwScene *page;
-  double x, y, w; /* text column */
+  CwScene   *page;
+  double     x, y, w; /* text column */
   GPtrArray *sources; /* distinct source strings, borrowed; the index + 1 is the reference number */
 } Report;
 
@@ -49,19 +49,21 @@ static double
 header (Report *r, const CwDocument *doc, const CwAnalysis *an)
 {
   const CwMolecule *mol = cw_document_peek_molecule (doc);
-  g_autofree char *summary = cw_molecule_dup_summary (mol);
-  g_autofree char *config = cw_molecule_dup_configuration (mol);
-  const char *title = cw_document_get_title (doc);
-  g_autofree char *t = g_markup_escape_text (title && *title ? title : summary, -1);
+  g_autofree char  *summary = cw_molecule_dup_summary (mol);
+  g_autofree char  *config = cw_molecule_dup_configuration (mol);
+  const char       *title = cw_document_get_title (doc);
+  g_autofree char  *t = g_markup_escape_text (title && *title ? title : summary, -1);
   g_autoptr (GDateTime) now = g_date_time_new_now_local ();
   g_autofree char *date = g_date_time_format (now, "%Y-%m-%d");
   g_autofree char *temp = cw_format_temperature (an->temperature, CW_TUNIT_KELVIN);
   g_autofree char *tc = cw_format_temperature (an->temperature, CW_TUNIT_CELSIUS);
-  g_autofree char *sub = g_markup_printf_escaped (_("%s%s%s · T = %s (%s) · %s solvent class"), summary,
-                                                  config && *config ? " · " : "", config ? config : "",
-                                                  temp, tc, cw_solvent_to_string (an->solvent));
-  double y = r->y;
-  CwPrim *d;
+  gboolean         titled = title && *title;
+  g_autofree char *sub = g_markup_printf_escaped (_("%s%s%s%sT = %s (%s) · %s solvent class"),
+                                                     titled ? summary : "", titled ? " · " : "",
+                                                     config ? config : "", config && *config ? " · " : "",
+                                                     temp, tc, cw_solvent_to_string (an->solvent));
+  double           y = r->y;
+  CwPrim          *d;
 
   y += text (r, t, 17, TRUE, r->x, y) + 2;
   y += text (r, sub, 9.5, FALSE, r->x, y) + 2;
@@ -79,8 +81,9 @@ results (Report *r, const CwAnalysis *an, CwEnergyUnit unit)
   g_autofree char *k = cw_render_format_k (an->K);
   g_autofree char *bar = cw_render_format_energy (an->barrier, unit);
   g_autofree char *line = NULL;
-  char *p[2][3];
-  double h;
+  g_autofree char *rate = cw_render_format_k (an->major == 1 ? an->k_reverse : an->k_forward);
+  char            *p[2][3];
+  double           h;
 
   for (int c = 0; c < 2; c++)
     {
@@ -91,9 +94,9 @@ results (Report *r, const CwAnalysis *an, CwEnergyUnit unit)
     }
   line = g_strdup_printf (_("<b>Δ<i>G</i>° = %s ± %s %s</b> (G(chair 2) − G(chair 1), ±1σ) · <b><i>K</i> = %s</b> · "
                             "chair 1: <b>%s %%</b> (%s–%s %%), chair 2: <b>%s %%</b> (%s–%s %%) for Δ<i>G</i>° ± 2σ · "
-                            "inversion barrier ≈ %s %s, about %.2g inversions per second"),
-                          dg, sg, cw_energy_unit_symbol (unit), k, p[0][0], p[0][1], p[0][2], p[1][0], p[1][1],
-                          p[1][2], bar, cw_energy_unit_symbol (unit), an->k_forward + an->k_reverse);
+                            "ring inversion from the major chair: Δ<i>G</i><sup>‡</sup> ≈ %s %s, <i>k</i> ≈ %s s<sup>−1</sup>"),
+                             dg, sg, cw_energy_unit_symbol (unit), k, p[0][0], p[0][1], p[0][2], p[1][0], p[1][1],
+                             p[1][2], bar, cw_energy_unit_symbol (unit), rate);
   h = para (r, line, 9.5, CW_INK_TEXT, r->y);
   for (int c = 0; c < 2; c++)
     for (int j = 0; j < 3; j++)
@@ -113,11 +116,11 @@ collect_rows (const CwAnalysis *an, GArray *rows)
     for (int i = 0; i < an->chair[c].n_terms; i++)
       {
         const CwTerm *t = &an->chair[c].terms[i];
-        gboolean merged = FALSE;
+        gboolean      merged = FALSE;
 
         for (guint j = 0; j < rows->len && !merged; j++)
           {
-            Row *row = &g_array_index (rows, Row, j);
+            Row          *row = &g_array_index (rows, Row, j);
             const CwTerm *o = row->t[0] ? row->t[0] : row->t[1];
 
             if (row->t[c] == NULL && o->kind == t->kind && o->sub_a == t->sub_a && o->sub_b == t->sub_b)
@@ -142,14 +145,13 @@ static double
 term_table (Report *r, const CwMolecule *mol, const CwAnalysis *an, CwEnergyUnit unit)
 {
   g_autoptr (GArray) rows = g_array_new (FALSE, FALSE, sizeof (Row));
-  double c1 = r->x + 250, c2 = r->x + 320, cs = r->x + 340, y = r->y, lh;
-  g_autofree char *h1 = g_strdup_printf (_("chair 1, %s"), cw_energy_unit_symbol (unit));
-  g_autofree char *h2 = g_strdup_printf (_("chair 2, %s"), cw_energy_unit_symbol (unit));
+  double           c1 = r->x + 300, c2 = r->x + 360, cs = r->x + 385, y = r->y, lh;
+  g_autofree char *h0 = g_strdup_printf (_("Term (energies in %s)"), cw_energy_unit_symbol (unit));
 
   collect_rows (an, rows);
-  lh = cell (r, _("Term"), r->x, y, 0, TRUE);
-  cell (r, h1, c1, y, 1, TRUE);
-  cell (r, h2, c2, y, 1, TRUE);
+  lh = cell (r, h0, r->x, y, 0, TRUE);
+  cell (r, _("chair 1"), c1, y, 1, TRUE);
+  cell (r, _("chair 2"), c2, y, 1, TRUE);
   cell (r, _("Source"), cs, y, 0, TRUE);
   y += lh + 1;
   cw_scene_line (r->page, CW_ROLE_NONE, CW_INK_GRID, r->x, y, r->x + r->w, y, 0.6);
@@ -158,8 +160,8 @@ term_table (Report *r, const CwMolecule *mol, const CwAnalysis *an, CwEnergyUnit
     y += cell (r, _("no terms: both chairs are unstrained"), r->x, y, 0, FALSE) + 1;
   for (guint i = 0; i < rows->len; i++)
     {
-      Row *row = &g_array_index (rows, Row, i);
-      const CwTerm *t = row->t[0] ? row->t[0] : row->t[1];
+      Row             *row = &g_array_index (rows, Row, i);
+      const CwTerm    *t = row->t[0] ? row->t[0] : row->t[1];
       g_autofree char *label = cw_term_dup_label (t, mol);
       g_autofree char *esc = g_markup_printf_escaped ("%s%s", label, t->estimated ? _(" (estimate)") : "");
       g_autofree char *src = g_strdup_printf ("[%d]%s", source_ref (r, t->source),
@@ -217,7 +219,7 @@ static double
 sources (Report *r, double size)
 {
   GString *s = g_string_new (NULL);
-  double h;
+  double   h;
 
   g_string_append_printf (s, "<b>%s</b> ", _("Sources."));
   for (guint i = 0; i < r->sources->len; i++)
@@ -233,8 +235,7 @@ sources (Report *r, double size)
 }
 
 static void
-draw_figure_at (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an,
-                const CwRenderOptions *opt, double x, double y, double w, double h)
+draw_figure_at (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double x, double y, double w, double h)
 {
   cairo_save (cr);
   cairo_translate (cr, x, y);
@@ -244,23 +245,22 @@ draw_figure_at (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule 
 
 typedef struct
 {
-  double row1, row2;  /* figure row heights */
+  double row1, row2; /* figure row heights */
   double row1_y, row2_y;
 } Rows;
 
 /* Lays out the text of the page around two figure rows of the given heights; returns the
  * height used. */
 static double
-build_page (Report *r, const CwData *data, const CwDocument *doc, const CwAnalysis *an, Rows *rows,
-            double sources_size)
+build_page (Report *r, const CwData *data, const CwDocument *doc, const CwAnalysis *an, Rows *rows, double sources_size)
 {
   const CwMolecule *mol = cw_document_peek_molecule (doc);
-  CwEnergyUnit unit = cw_document_get_energy_unit (doc);
-  double top = r->y;
-  g_autofree char *caution = g_markup_escape_text (cw_caution_text (), -1);
-  g_autofree char *caution_m = g_strdup_printf ("<b>%s</b> %s", _("Caution."), caution);
-  CwPrim *box;
-  double h;
+  CwEnergyUnit      unit = cw_document_get_energy_unit (doc);
+  double            top = r->y;
+  g_autofree char  *caution = g_markup_escape_text (cw_caution_text (), -1);
+  g_autofree char  *caution_m = g_strdup_printf ("<b>%s</b> %s", _("Caution."), caution);
+  CwPrim           *box;
+  double            h;
 
   r->y += header (r, doc, an);
   rows->row1_y = r->y;
@@ -285,16 +285,15 @@ build_page (Report *r, const CwData *data, const CwDocument *doc, const CwAnalys
 }
 
 void
-cw_render_report (cairo_t *cr, const CwData *data, const CwDocument *doc, const CwAnalysis *an,
-                  double width, double height)
+cw_render_report (cairo_t *cr, const CwData *data, const CwDocument *doc, const CwAnalysis *an, double width, double height)
 {
-  Report r = { NULL, MARGIN, MARGIN, width - 2 * MARGIN, NULL };
-  Rows rows = { 0 };
+  Report          r = { NULL, MARGIN, MARGIN, width - 2 * MARGIN, NULL };
+  Rows            rows = { 0 };
   CwRenderOptions opt;
-  double room, text_h, size = SMALL;
+  double          room, text_h, size = SMALL;
   g_autoptr (GDateTime) now = g_date_time_new_now_local ();
-  g_autofree char *date = g_date_time_format (now, "%Y-%m-%d %H:%M");
-  g_autofree char *footer = g_strdup_printf ("Chairwise %s · %s", PACKAGE_VERSION, date);
+  g_autofree char  *date = g_date_time_format (now, "%Y-%m-%d %H:%M");
+  g_autofree char  *footer = g_strdup_printf ("Chairwise %s · %s", PACKAGE_VERSION, date);
   const CwMolecule *mol = cw_document_peek_molecule (doc);
 
   cw_render_options_init (&opt);

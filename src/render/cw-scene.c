@@ -147,23 +147,22 @@ cw_scene_polygon (CwScene *scene, CwRole role, CwInk ink, const CwPoint *pts, gu
 static void
 arrow_head (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, double x1, double y1, double width)
 {
-  double len = hypot (x1 - x0, y1 - y0);
-  double ux, uy, hl = 4.0 + 2.5 * width, hw = 1.5 + 1.2 * width;
+  double  len = hypot (x1 - x0, y1 - y0);
+  double  ux, uy, hl = 4.0 + 2.5 * width, hw = 1.5 + 1.2 * width;
   CwPoint pts[3];
 
   if (len < 1e-9)
     return;
   ux = (x1 - x0) / len;
   uy = (y1 - y0) / len;
-  pts[0] = (CwPoint) { x1, y1 };
-  pts[1] = (CwPoint) { x1 - hl * ux - hw * uy, y1 - hl * uy + hw * ux };
-  pts[2] = (CwPoint) { x1 - hl * ux + hw * uy, y1 - hl * uy - hw * ux };
+  pts[0] = (CwPoint){ x1, y1 };
+  pts[1] = (CwPoint){ x1 - hl * ux - hw * uy, y1 - hl * uy + hw * ux };
+  pts[2] = (CwPoint){ x1 - hl * ux + hw * uy, y1 - hl * uy - hw * ux };
   cw_scene_polygon (scene, role, ink, pts, 3);
 }
 
 void
-cw_scene_arrow (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, double x1, double y1,
-                double width, gboolean both)
+cw_scene_arrow (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, double x1, double y1, double width, gboolean both)
 {
   double len = hypot (x1 - x0, y1 - y0);
   double hl = 4.0 + 2.5 * width;
@@ -182,41 +181,38 @@ cw_scene_arrow (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, do
 }
 
 CwPrim *
-cw_scene_text (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-               gboolean bold, double x, double y)
+cw_scene_text (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, gboolean bold, double x, double y)
 {
   return cw_scene_text_at (scene, role, ink, markup, size, bold, x, y, 0.0, 0.0);
 }
 
 CwPrim *
-cw_scene_text_at (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                  gboolean bold, double x, double y, double ax, double ay)
+cw_scene_text_at (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, gboolean bold, double x, double y, double ax, double ay)
 {
   CwTextMetrics m;
-  CwPrim *p;
+  CwPrim       *p;
 
   cw_text_measure (markup, size, bold, 0, 0, 0, &m);
   p = cw_scene_add (scene, CW_PRIM_TEXT, role, ink);
   p->markup = g_strdup (markup);
   p->size = size;
   p->bold = bold;
-  p->box = (CwBox) { x - ax * m.w, y - ay * m.h, m.w, m.h };
+  p->box = (CwBox){ x - ax * m.w, y - ay * m.h, m.w, m.h };
   return p;
 }
 
 CwPrim *
-cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                    double x, double y, double wrap)
+cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, double x, double y, double wrap)
 {
   CwTextMetrics m;
-  CwPrim *p;
+  CwPrim       *p;
 
   cw_text_measure (markup, size, FALSE, wrap, 0, 0, &m);
   p = cw_scene_add (scene, CW_PRIM_TEXT, role, ink);
   p->markup = g_strdup (markup);
   p->size = size;
   p->wrap = wrap;
-  p->box = (CwBox) { x, y, wrap, m.h };
+  p->box = (CwBox){ x, y, wrap, m.h };
   return p;
 }
 
@@ -233,7 +229,7 @@ cw_box_union (const CwBox *a, const CwBox *b)
   double x0 = MIN (a->x, b->x), y0 = MIN (a->y, b->y);
   double x1 = MAX (a->x + a->w, b->x + b->w), y1 = MAX (a->y + a->h, b->y + b->h);
 
-  return (CwBox) { x0, y0, x1 - x0, y1 - y0 };
+  return (CwBox){ x0, y0, x1 - x0, y1 - y0 };
 }
 
 /* Liang–Barsky clip of the segment against the box. */
@@ -282,11 +278,11 @@ static PangoContext *
 measure_context (void)
 {
   static GPrivate key = G_PRIVATE_INIT (g_object_unref);
-  PangoContext *ctx = g_private_get (&key);
+  PangoContext   *ctx = g_private_get (&key);
 
   if (ctx == NULL)
     {
-      PangoFontMap *map = pango_cairo_font_map_get_default ();
+      PangoFontMap         *map = pango_cairo_font_map_get_default ();
       cairo_font_options_t *fo = cairo_font_options_create ();
 
       ctx = pango_font_map_create_context (map);
@@ -304,7 +300,7 @@ measure_context (void)
 PangoLayout *
 cw_text_layout_new (const char *markup, double size, gboolean bold, double wrap)
 {
-  PangoLayout *layout = pango_layout_new (measure_context ());
+  PangoLayout          *layout = pango_layout_new (measure_context ());
   PangoFontDescription *desc = pango_font_description_from_string (CW_FONT_FAMILY);
 
   pango_font_description_set_absolute_size (desc, size * PANGO_SCALE);
@@ -321,10 +317,33 @@ cw_text_layout_new (const char *markup, double size, gboolean bold, double wrap)
   return layout;
 }
 
-void
-cw_text_measure (const char *markup, double size, gboolean bold, double wrap,
-                 int range_start, int range_end, CwTextMetrics *out)
+/* Measurements repeat a lot (every try of every label): keep them, per thread. */
+static GHashTable *
+measure_cache (void)
 {
+  static GPrivate key = G_PRIVATE_INIT ((GDestroyNotify) g_hash_table_unref);
+  GHashTable     *cache = g_private_get (&key);
+
+  if (cache == NULL || g_hash_table_size (cache) > 8192)
+    {
+      cache = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
+      g_private_replace (&key, cache);
+    }
+  return cache;
+}
+
+void
+cw_text_measure (const char *markup, double size, gboolean bold, double wrap, int range_start, int range_end, CwTextMetrics *out)
+{
+  GHashTable      *cache = measure_cache ();
+  g_autofree char *k = g_strdup_printf ("%g|%d|%g|%d|%d|%s", size, bold, wrap, range_start, range_end, markup);
+  CwTextMetrics   *hit = g_hash_table_lookup (cache, k);
+
+  if (hit != NULL)
+    {
+      *out = *hit;
+      return;
+    }
   g_autoptr (PangoLayout) layout = cw_text_layout_new (markup, size, bold, wrap);
   PangoRectangle logical;
 
@@ -346,6 +365,7 @@ cw_text_measure (const char *markup, double size, gboolean bold, double wrap,
       out->atom_x0 = (double) MIN (a.x, b.x) / PANGO_SCALE;
       out->atom_x1 = (double) MAX (a.x + a.width, b.x + b.width) / PANGO_SCALE;
     }
+  g_hash_table_insert (cache, g_steal_pointer (&k), g_memdup2 (out, sizeof *out));
 }
 
 char *

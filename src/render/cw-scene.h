@@ -10,9 +10,9 @@ G_BEGIN_DECLS
 
 typedef enum
 {
-  CW_PRIM_LINE,    /* x0,y0 → x1,y1 */
-  CW_PRIM_WEDGE,   /* solid wedge, narrow at x0,y0, `wide` across at x1,y1 */
-  CW_PRIM_HASH,    /* hashed wedge, same geometry */
+  CW_PRIM_LINE,  /* x0,y0 → x1,y1 */
+  CW_PRIM_WEDGE, /* solid wedge, narrow at x0,y0, `wide` across at x1,y1 */
+  CW_PRIM_HASH,  /* hashed wedge, same geometry */
   CW_PRIM_POLYLINE,
   CW_PRIM_POLYGON, /* filled */
   CW_PRIM_MARKER,  /* shape `marker` of size `wide` at x0,y0 */
@@ -33,7 +33,7 @@ typedef enum
   CW_INK_STRAIN,   /* syn-1,3-diaxial marks */
   CW_INK_GAUCHE,   /* gauche marks */
   CW_INK_HIGHLIGHT,
-  CW_INK_PANEL,    /* faint fill behind the major chair */
+  CW_INK_PANEL, /* faint fill behind the major chair */
   CW_N_INKS
 } CwInk;
 
@@ -76,37 +76,38 @@ typedef struct
 
 typedef struct
 {
-  CwPrimKind kind;
-  CwRole role;
-  CwInk ink;
-  int chair;      /* 0 or 1 for chair drawings, else -1 */
-  int sub;        /* molecule substituent index, or -1 */
-  int position;   /* ring carbon 1..6, or 0 */
-  gboolean axial; /* for substituent bonds in a chair */
-  double x0, y0, x1, y1;
-  double line_width;
-  double wide;    /* wedge width at the wide end; marker size */
-  double dash;    /* 0 solid, else dash length */
-  gboolean fill;
-  gboolean halo;  /* lines: a background-coloured margin, so the line reads as in front */
+  CwPrimKind    kind;
+  CwRole        role;
+  CwInk         ink;
+  int           chair;    /* 0 or 1 for chair drawings, else -1 */
+  int           sub;      /* molecule substituent index, or -1 */
+  int           position; /* ring carbon 1..6, or 0 */
+  gboolean      axial;    /* for substituent bonds in a chair */
+  double        x0, y0, x1, y1;
+  double        line_width;
+  double        wide; /* wedge width at the wide end; marker size */
+  double        dash; /* 0 solid, else dash length */
+  gboolean      fill;
+  gboolean      halo;     /* lines: a margin in halo_ink, so the line reads as in front */
+  CwInk         halo_ink; /* what lies under it: the background unless set */
   CwMarkerShape marker;
-  guint first_point, n_points; /* polyline / polygon, into CwScene.points */
+  guint         first_point, n_points; /* polyline / polygon, into CwScene.points */
   /* text */
-  char *markup;
-  double size;
+  char    *markup;
+  double   size;
   gboolean bold;
-  double wrap;    /* > 0: wrap at this width */
-  CwBox box;      /* the laid-out text's logical box */
+  double   wrap; /* > 0: wrap at this width */
+  CwBox    box;  /* the laid-out text's logical box */
 } CwPrim;
 
 typedef struct
 {
   GArray *prims;  /* CwPrim */
   GArray *points; /* CwPoint */
-  double width;   /* the box painted: (origin, origin + size) */
-  double height;
-  double origin_x;
-  double origin_y;
+  double  width;  /* the box painted: (origin, origin + size) */
+  double  height;
+  double  origin_x;
+  double  origin_y;
 } CwScene;
 
 CwScene *cw_scene_new (double width, double height);
@@ -116,20 +117,16 @@ CwPrim  *cw_scene_line (CwScene *scene, CwRole role, CwInk ink, double x0, doubl
 CwPrim  *cw_scene_polyline (CwScene *scene, CwRole role, CwInk ink, const CwPoint *pts, guint n, double width);
 CwPrim  *cw_scene_polygon (CwScene *scene, CwRole role, CwInk ink, const CwPoint *pts, guint n);
 /* Arrow from (x0,y0) to (x1,y1) with a filled head at the end; both heads when `both`. */
-void     cw_scene_arrow (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, double x1, double y1,
-                         double width, gboolean both);
+void cw_scene_arrow (CwScene *scene, CwRole role, CwInk ink, double x0, double y0, double x1, double y1, double width, gboolean both);
 /* Text with its top-left corner at (x, y); the box is measured with Pango. */
-CwPrim  *cw_scene_text (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                        gboolean bold, double x, double y);
+CwPrim *cw_scene_text (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, gboolean bold, double x, double y);
 /* Text placed relative to (x, y): ax, ay in 0..1 pick the point of the box put there. */
-CwPrim  *cw_scene_text_at (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                           gboolean bold, double x, double y, double ax, double ay);
-CwPrim  *cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size,
-                             double x, double y, double wrap);
-CwPrim  *cw_scene_get (const CwScene *scene, guint i);
+CwPrim *cw_scene_text_at (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, gboolean bold, double x, double y, double ax, double ay);
+CwPrim *cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, double x, double y, double wrap);
+CwPrim *cw_scene_get (const CwScene *scene, guint i);
 /* Copies every prim of src into scene, moved by (dx, dy). */
-void     cw_scene_append (CwScene *scene, const CwScene *src, double dx, double dy);
-guint    cw_scene_get_n (const CwScene *scene);
+void  cw_scene_append (CwScene *scene, const CwScene *src, double dx, double dy);
+guint cw_scene_get_n (const CwScene *scene);
 /* TRUE when a placed text box (inflated by pad) overlaps `box`; skip is a prim index to ignore. */
 gboolean cw_scene_box_hits_text (const CwScene *scene, const CwBox *box, double pad, int skip);
 
@@ -137,19 +134,20 @@ gboolean cw_scene_box_hits_text (const CwScene *scene, const CwBox *box, double 
 gboolean cw_box_overlap (const CwBox *a, const CwBox *b, double pad);
 gboolean cw_segment_hits_box (double x0, double y0, double x1, double y1, const CwBox *box);
 CwBox    cw_box_union (const CwBox *a, const CwBox *b);
+/* What a prim covers on the page, strokes included. */
+CwBox cw_prim_bounds (const CwScene *scene, const CwPrim *p);
 
 /* Text measuring (Pango, 72 units per inch, no hinting so screen and files agree). */
 typedef struct
 {
-  double w, h;          /* logical size */
-  double baseline;      /* from the top */
+  double w, h;             /* logical size */
+  double baseline;         /* from the top */
   double atom_x0, atom_x1; /* horizontal extent of the chosen character range */
 } CwTextMetrics;
 
-void     cw_text_measure (const char *markup, double size, gboolean bold, double wrap,
-                          int range_start, int range_end, CwTextMetrics *out);
+void cw_text_measure (const char *markup, double size, gboolean bold, double wrap, int range_start, int range_end, CwTextMetrics *out);
 /* Plain text of a markup string (newly allocated), or a copy when the markup does not parse. */
-char    *cw_markup_dup_plain (const char *markup);
+char *cw_markup_dup_plain (const char *markup);
 
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (CwScene, cw_scene_free)
 

@@ -40,7 +40,7 @@ app_test_pump (guint     ms,
                gboolean *done)
 {
   gint64 end = g_get_monotonic_time () + (gint64) ms * 1000;
-  guint id = g_timeout_add (5, app_test_tick_cb, NULL);
+  guint  id = g_timeout_add (5, app_test_tick_cb, NULL);
 
   while (g_get_monotonic_time () < end && (done == NULL || !*done))
     g_main_context_iteration (NULL, TRUE);
@@ -51,7 +51,7 @@ static inline void
 app_test_wait_mapped (GtkWidget *widget)
 {
   gint64 end = g_get_monotonic_time () + 5 * G_USEC_PER_SEC;
-  guint id = g_timeout_add (5, app_test_tick_cb, NULL);
+  guint  id = g_timeout_add (5, app_test_tick_cb, NULL);
 
   while (g_get_monotonic_time () < end &&
          !(gtk_widget_get_mapped (widget) && gtk_widget_get_width (widget) > 0))

@@ -14,15 +14,15 @@ busy_fraction (const guint32 *px,
                guint         *n_colours)
 {
   g_autoptr (GHashTable) counts = g_hash_table_new (NULL, NULL);
-  guint best = 0, total = 0;
+  guint          best = 0, total = 0;
   GHashTableIter it;
-  gpointer key, value;
+  gpointer       key, value;
 
   for (int y = y0; y < y0 + h; y++)
     for (int x = x0; x < x0 + w; x++)
       {
         guint32 c = px[y * stride + x];
-        guint n = GPOINTER_TO_UINT (g_hash_table_lookup (counts, GUINT_TO_POINTER (c))) + 1;
+        guint   n = GPOINTER_TO_UINT (g_hash_table_lookup (counts, GUINT_TO_POINTER (c))) + 1;
 
         g_hash_table_insert (counts, GUINT_TO_POINTER (c), GUINT_TO_POINTER (n));
         total++;
@@ -37,17 +37,17 @@ busy_fraction (const guint32 *px,
 static void
 test_screenshot_not_blank (void)
 {
-  CwWindow *win = g_object_new (CW_TYPE_WINDOW, NULL);
+  CwWindow        *win = g_object_new (CW_TYPE_WINDOW, NULL);
   g_autofree char *demo = g_build_filename (cw_data_find_dir (), "demo.json", NULL);
   g_autofree char *path = app_test_tmp_path ("window.png");
   g_autoptr (GFile) file = g_file_new_for_path (demo);
   g_autoptr (GError) error = NULL;
   g_autoptr (GdkTexture) texture = NULL;
   g_autofree guint32 *px = NULL;
-  graphene_rect_t bounds;
-  guint n_colours;
-  int w, h;
-  double busy;
+  graphene_rect_t     bounds;
+  guint               n_colours;
+  int                 w, h;
+  double              busy;
 
   g_assert_true (cw_window_open_file (win, file, &error));
   g_assert_no_error (error);

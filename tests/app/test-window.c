@@ -57,11 +57,11 @@ expected_pop (int chair, double frac)
 static void
 test_edit_updates_results (void)
 {
-  CwWindow *win = new_window ();
-  double t = 298.15;
-  double x_eq = equatorial_fraction (methyl_a (t), t);
-  g_autofree char *pop2 = expected_pop (2, x_eq);
-  g_autofree char *pop1 = expected_pop (1, 1.0 - x_eq);
+  CwWindow         *win = new_window ();
+  double            t = 298.15;
+  double            x_eq = equatorial_fraction (methyl_a (t), t);
+  g_autofree char  *pop2 = expected_pop (2, x_eq);
+  g_autofree char  *pop1 = expected_pop (1, 1.0 - x_eq);
   const CwAnalysis *an;
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
@@ -103,7 +103,7 @@ test_edit_updates_results (void)
 static void
 test_undo_redo (void)
 {
-  CwWindow *win = new_window ();
+  CwWindow        *win = new_window ();
   g_autofree char *spec = NULL;
 
   set_group (win, 1, "up", "methyl");
@@ -138,7 +138,7 @@ test_undo_redo (void)
 static void
 test_geminal_and_custom (void)
 {
-  CwWindow *win = new_window ();
+  CwWindow         *win = new_window ();
   const CwMolecule *mol;
 
   set_group (win, 2, "up", "methyl");
@@ -160,8 +160,8 @@ test_geminal_and_custom (void)
 static void
 test_save_open_round_trip (void)
 {
-  CwWindow *win = new_window ();
-  CwWindow *other;
+  CwWindow        *win = new_window ();
+  CwWindow        *other;
   g_autofree char *path = app_test_tmp_path ("round-trip.json");
   g_autofree char *spec1 = NULL, *spec2 = NULL;
   g_autoptr (GFile) file = g_file_new_for_path (path);
@@ -198,7 +198,7 @@ test_save_open_round_trip (void)
 static void
 test_open_bad_file (void)
 {
-  CwWindow *win = new_window ();
+  CwWindow        *win = new_window ();
   g_autofree char *path = app_test_tmp_path ("bad.json");
   g_autoptr (GFile) file = g_file_new_for_path (path);
   g_autoptr (GError) error = NULL;
@@ -215,7 +215,7 @@ static gboolean
 has_magic (const char *path, const char *magic, gsize len)
 {
   g_autofree char *contents = NULL;
-  gsize n = 0;
+  gsize            n = 0;
 
   if (!g_file_get_contents (path, &contents, &n, NULL))
     return FALSE;
@@ -225,7 +225,7 @@ has_magic (const char *path, const char *magic, gsize len)
 static void
 test_export (void)
 {
-  CwWindow *win = new_window ();
+  CwWindow        *win = new_window ();
   g_autofree char *png = app_test_tmp_path ("chairs.png");
   g_autofree char *svg = app_test_tmp_path ("profile.svg");
   g_autofree char *pdf = app_test_tmp_path ("scan.pdf");
@@ -251,8 +251,8 @@ test_export (void)
 static void
 test_copy_figure (void)
 {
-  CwWindow *win = new_window ();
-  GdkClipboard *clipboard = gtk_widget_get_clipboard (GTK_WIDGET (win));
+  CwWindow          *win = new_window ();
+  GdkClipboard      *clipboard = gtk_widget_get_clipboard (GTK_WIDGET (win));
   GdkContentFormats *formats;
 
   set_group (win, 1, "up", "methyl");
@@ -267,7 +267,7 @@ test_copy_figure (void)
 static void
 test_unsaved_changes (void)
 {
-  CwWindow *win = new_window ();
+  CwWindow        *win = new_window ();
   g_autofree char *path = app_test_tmp_path ("unsaved.json");
   g_autoptr (GFile) file = g_file_new_for_path (path);
   gpointer weak = win;
@@ -311,8 +311,8 @@ test_unsaved_changes (void)
 static void
 test_autosave_restore (void)
 {
-  CwWindow *win = new_window ();
-  CwWindow *other;
+  CwWindow        *win = new_window ();
+  CwWindow        *other;
   g_autofree char *saved_path = NULL;
   g_autofree char *spec = NULL;
   g_autoptr (GError) error = NULL;

@@ -12,8 +12,8 @@
 
 #define N_EDITS 200
 
-static gint64 layout_start;
-static gint64 paint_end;
+static gint64   layout_start;
+static gint64   paint_end;
 static gboolean painted;
 
 static void
@@ -59,10 +59,10 @@ int
 main (int argc, char *argv[])
 {
   static const char *groups[] = { "methyl", "tert-butyl", "bromo", "phenyl", "hydroxy", "isopropyl" };
-  double times[N_EDITS], edit_only[N_EDITS];
-  GdkFrameClock *clock;
-  CwWindow *win;
-  guint tick;
+  double             times[N_EDITS], edit_only[N_EDITS];
+  GdkFrameClock     *clock;
+  CwWindow          *win;
+  guint              tick;
 
   if (!gtk_init_check ())
     {
@@ -90,7 +90,7 @@ main (int argc, char *argv[])
   for (int i = 0; i < N_EDITS; i++)
     {
       gint64 t0, t1;
-      int pos = 3 + i % 4;
+      int    pos = 3 + i % 4;
 
       layout_start = 0;
       painted = FALSE;

@@ -20,7 +20,7 @@ cmp_double (const void *a, const void *b)
 int
 main (int argc, char *argv[])
 {
-  double frame_ms[RUNS], rss_mb[RUNS];
+  double           frame_ms[RUNS], rss_mb[RUNS];
   g_autofree char *shot = NULL;
   g_autofree char *dir = g_dir_make_tmp ("cw-bench-XXXXXX", NULL);
 
@@ -42,7 +42,7 @@ main (int argc, char *argv[])
       g_autoptr (GSubprocess) proc = NULL;
       g_autoptr (GDataInputStream) in = NULL;
       gint64 t0 = g_get_monotonic_time ();
-      char *line;
+      char  *line;
 
       frame_ms[r] = rss_mb[r] = -1;
       proc = g_subprocess_new (G_SUBPROCESS_FLAGS_STDOUT_PIPE, &error, argv[1], "--screenshot", shot, "--demo",

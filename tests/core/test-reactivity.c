@@ -183,6 +183,12 @@ test_exocyclic_and_none (void)
   /* the ring alkenes are trisubstituted: C1 keeps its methyl */
   g_assert_cmpint (find_alkene (&r.groups[0], 1, 2)->substitution, ==, 3);
 
+  /* a deuterio group anti to the chloride counts as a β-hydrogen isotope (the alkene loses D) */
+  compute ("1u=chloro 2d=deuterio", 298.15, &r, &an);
+  g_assert_cmpint (r.groups[0].n_anti[0], ==, 2);
+  g_assert_true (r.groups[0].anti[0][0].deuterium != r.groups[0].anti[0][1].deuterium);
+  g_assert_nonnull (find_alkene (&r.groups[0], 1, 2));
+
   compute ("1u=methyl", 298.15, &r, &an);
   g_assert_cmpint (r.n_groups, ==, 0);
   g_assert_true (has_warning (&r, CW_REACT_NO_LEAVING_GROUP));

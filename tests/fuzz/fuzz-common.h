@@ -43,15 +43,20 @@ fuzz_data (void)
 }
 
 /* A refusal must say what was wrong: a core error with a non-empty message, in UTF-8 whenever
- * the input was (the window shows it in a label). */
+ * the input was (the window shows it in a label). CHAIRWISE_FUZZ_SKIP_UTF8=1 turns the UTF-8
+ * check off, for exploring past a known, reported problem locally; CI never sets it. */
 static inline void
 fuzz_check_error (const GError *error, gboolean input_utf8)
 {
+  static int skip_utf8 = -1;
+
+  if (skip_utf8 < 0)
+    skip_utf8 = g_strcmp0 (g_getenv ("CHAIRWISE_FUZZ_SKIP_UTF8"), "1") == 0;
   FUZZ_CHECK (error != NULL, "failed without an error");
   FUZZ_CHECK (error->domain == CW_CORE_ERROR, "error from domain %s: %s",
               g_quark_to_string (error->domain), error->message);
   FUZZ_CHECK (error->message != NULL && error->message[0] != '\0', "empty message");
-  if (input_utf8)
+  if (input_utf8 && !skip_utf8)
     FUZZ_CHECK (g_utf8_validate (error->message, -1, NULL), "message is not UTF-8: %s",
                 error->message);
 }
