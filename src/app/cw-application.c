@@ -12,6 +12,8 @@ struct _CwApplication
 {
   GtkApplication parent_instance;
 
+  GSettings *desktop; /* org.gnome.desktop.interface, when installed */
+
   char          *screenshot_path; /* --screenshot FILE */
   gboolean       demo;            /* --demo */
   gint64         start_time;
@@ -147,6 +149,37 @@ offer_restore (CwWindow *win)
   gtk_window_present (GTK_WINDOW (dialog));
 }
 
+/* ---- dark style ------------------------------------------------------------------- */
+
+/* GTK 4.8 without libadwaita does not read the desktop's colour scheme itself: follow
+ * org.gnome.desktop.interface color-scheme where that schema exists. */
+static void
+color_scheme_changed_cb (GSettings  *desktop,
+                         const char *key,
+                         gpointer    user_data)
+{
+  g_autofree char *scheme = g_settings_get_string (desktop, "color-scheme");
+
+  g_object_set (gtk_settings_get_default (), "gtk-application-prefer-dark-theme",
+                g_strcmp0 (scheme, "prefer-dark") == 0, NULL);
+}
+
+static void
+follow_color_scheme (CwApplication *self)
+{
+  GSettingsSchemaSource *source = g_settings_schema_source_get_default ();
+  g_autoptr (GSettingsSchema) schema = NULL;
+
+  if (source == NULL || g_getenv ("GTK_THEME") != NULL)
+    return;
+  schema = g_settings_schema_source_lookup (source, "org.gnome.desktop.interface", TRUE);
+  if (schema == NULL || !g_settings_schema_has_key (schema, "color-scheme"))
+    return;
+  self->desktop = g_settings_new_full (schema, NULL, NULL);
+  g_signal_connect (self->desktop, "changed::color-scheme", G_CALLBACK (color_scheme_changed_cb), NULL);
+  color_scheme_changed_cb (self->desktop, "color-scheme", NULL);
+}
+
 /* ---- app actions -------------------------------------------------------------------- */
 
 static void
@@ -238,6 +271,7 @@ cw_application_startup (GApplication *app)
   gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
                                               GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
   gtk_window_set_default_icon_name (CW_APP_ID);
+  follow_color_scheme (CW_APPLICATION (app));
 }
 
 static CwWindow *
@@ -313,6 +347,7 @@ cw_application_finalize (GObject *object)
   CwApplication *self = CW_APPLICATION (object);
 
   g_clear_pointer (&self->screenshot_path, g_free);
+  g_clear_object (&self->desktop);
 
   G_OBJECT_CLASS (cw_application_parent_class)->finalize (object);
 }

@@ -9,6 +9,7 @@ struct _CwCustomGroupDialog
   GtkWindow parent_instance;
 
   /* template children */
+  GtkButton     *add_button;
   GtkEntry      *name_entry;
   GtkSpinButton *a_spin;
   GtkSpinButton *sigma_spin;
@@ -78,6 +79,7 @@ cw_custom_group_dialog_class_init (CwCustomGroupDialogClass *klass)
                   G_TYPE_INT);
 
   gtk_widget_class_set_template_from_resource (widget_class, "/org/chairwise/Chairwise/ui/cw-custom-group-dialog.ui");
+  gtk_widget_class_bind_template_child (widget_class, CwCustomGroupDialog, add_button);
   gtk_widget_class_bind_template_child (widget_class, CwCustomGroupDialog, name_entry);
   gtk_widget_class_bind_template_child (widget_class, CwCustomGroupDialog, a_spin);
   gtk_widget_class_bind_template_child (widget_class, CwCustomGroupDialog, sigma_spin);

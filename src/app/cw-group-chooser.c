@@ -22,7 +22,9 @@ struct _CwGroupChooser
   GtkStringFilter    *filter;
   GtkSingleSelection *selection;
 
-  CwEnergyUnit unit;
+  CwEnergyUnit   unit;
+  const CwGroup *shown; /* what the button shows, to skip redundant updates */
+  gboolean       shown_valid;
 };
 
 G_DEFINE_FINAL_TYPE (CwGroupChooser, cw_group_chooser, GTK_TYPE_WIDGET)
@@ -131,8 +133,13 @@ search_changed_cb (CwGroupChooser *self)
 static void
 search_activate_cb (CwGroupChooser *self)
 {
-  guint pos = gtk_single_selection_get_selected (self->selection);
+  const char *text = gtk_editable_get_text (GTK_EDITABLE (self->search_entry));
+  guint       pos;
 
+  /* The entry delays search-changed; a quick Enter must still see the typed text. */
+  if (g_strcmp0 (text, gtk_string_filter_get_search (self->filter)) != 0)
+    search_changed_cb (self);
+  pos = gtk_single_selection_get_selected (self->selection);
   if (pos == GTK_INVALID_LIST_POSITION)
     pos = 0;
   list_activate_cb (self, pos);
@@ -283,6 +290,10 @@ cw_group_chooser_set_group (CwGroupChooser *self,
 
   g_return_if_fail (CW_IS_GROUP_CHOOSER (self));
 
+  if (self->shown_valid && self->shown == group)
+    return;
+  self->shown = group;
+  self->shown_valid = TRUE;
   if (group == NULL)
     {
       gtk_label_set_text (self->button_label, _("None"));
@@ -305,6 +316,7 @@ cw_group_chooser_set_energy_unit (CwGroupChooser *self,
   g_return_if_fail (CW_IS_GROUP_CHOOSER (self));
 
   self->unit = unit;
+  self->shown_valid = FALSE;
   /* Rebind the visible rows so their values follow the unit. */
   gtk_list_view_set_model (self->list_view, NULL);
   gtk_list_view_set_model (self->list_view, GTK_SELECTION_MODEL (self->selection));

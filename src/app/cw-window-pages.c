@@ -216,7 +216,6 @@ cw_window_update_pages (CwWindow *self)
   const CwGeometryData *gd;
 
   /* Only the page on screen is computed; the others when they are shown. */
-  self->pages_stale = TRUE;
   if (page == NULL || !self->an_valid)
     return;
   if (g_strcmp0 (page, "isomers") == 0)
@@ -235,7 +234,4 @@ cw_window_update_pages (CwWindow *self)
       else
         update_reactions (self, gd);
     }
-  else
-    return;
-  self->pages_stale = FALSE;
 }

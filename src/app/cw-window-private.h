@@ -77,7 +77,6 @@ struct _CwWindow
   gboolean      updating_temperature;
   gboolean      close_confirmed;
   gboolean      close_after_save;
-  gboolean      pages_stale; /* the hidden lower pages need recomputing when shown */
 };
 
 /* cw-window.c */

@@ -139,7 +139,11 @@ set_row (CwWindow   *self,
       if (c == 3)
         {
           set_css_class (GTK_WIDGET (label), "dim-label", !heading);
-          gtk_widget_set_tooltip_text (GTK_WIDGET (label), heading ? NULL : texts[c]);
+          const char      *tip = heading ? NULL : texts[c];
+          const char *old = gtk_widget_get_tooltip_text (GTK_WIDGET (label));
+
+          if (g_strcmp0 (old, tip) != 0)
+            gtk_widget_set_tooltip_text (GTK_WIDGET (label), tip);
         }
       gtk_widget_set_visible (GTK_WIDGET (label), TRUE);
     }

@@ -149,6 +149,9 @@ update_temperature_widgets (CwWindow *self)
   double            offset = tu == CW_TUNIT_CELSIUS ? CW_ZERO_C : 0.0;
   g_autofree char  *label = cw_format_temperature (k, tu);
 
+  if (gtk_adjustment_get_value (self->temperature_adjustment) == k - offset &&
+      gtk_adjustment_get_lower (self->temperature_adjustment) == 100.0 - offset)
+    return;
   self->updating_temperature = TRUE;
   gtk_adjustment_configure (self->temperature_adjustment, k - offset, 100.0 - offset, 600.0 - offset,
                             1.0, 10.0, 0.0);
@@ -177,7 +180,9 @@ cw_window_update_title (CwWindow *self)
   gtk_widget_set_visible (GTK_WIDGET (self->subtitle_label), TRUE);
   {
     g_autofree char *win_title = g_strdup_printf ("%s – %s", shown, _("Chairwise"));
-    gtk_window_set_title (GTK_WINDOW (self), win_title);
+
+    if (g_strcmp0 (gtk_window_get_title (GTK_WINDOW (self)), win_title) != 0)
+      gtk_window_set_title (GTK_WINDOW (self), win_title);
   }
 }
 
@@ -325,7 +330,8 @@ temperature_value_changed_cb (CwWindow *self)
 static void
 lower_page_changed_cb (CwWindow *self)
 {
-  if (self->pages_stale && self->doc != NULL)
+  /* Pages other than the visible one are not kept up to date: compute it now. */
+  if (self->doc != NULL)
     cw_window_update_pages (self);
 }
 

@@ -18,14 +18,13 @@
 static void
 print_isomers_text (const CwIsomerSet *set, CwEnergyUnit unit, const CwMolecule *constitution)
 {
-  const char *u = cw_energy_unit_symbol (unit);
+  const char      *u = cw_energy_unit_symbol (unit);
   g_autofree char *t = cw_format_temperature (set->temperature, CW_TUNIT_KELVIN);
 
   printf (_("cis/trans isomers: %u (%d ring carbons with one group or two different groups)\n"),
-          set->isomers->len, set->n_stereo_carbons);
+             set->isomers->len, set->n_stereo_carbons);
   printf (_("temperature %s, solvent %s, energies in %s\n\n"), t, cw_solvent_to_string (set->solvent), u);
-  printf ("%-3s %-22s %-44s %9s %9s %9s %8s %6s %9s %7s\n", "#", _("configuration"), "SMILES",
-          "G", _("G rel"), _("<E> rel"), _("species"), _("major"), _("dG ring"), _("x eq"));
+  printf ("%-3s %-22s %-44s %9s %9s %9s %8s %6s %9s %7s\n", "#", _("configuration"), "SMILES", "G", _("G rel"), _("<E> rel"), _("species"), _("major"), _("dG ring"), _("x eq"));
   for (guint i = 0; i < set->isomers->len; i++)
     {
       const CwIsomer *iso = set->isomers->pdata[i];
@@ -48,7 +47,7 @@ print_isomers_json (const CwIsomerSet *set, CwEnergyUnit unit)
 {
   cJSON *root = cJSON_CreateObject ();
   cJSON *list = cJSON_AddArrayToObject (root, "isomers");
-  char *text;
+  char  *text;
 
   cJSON_AddStringToObject (root, "format", "chairwise-isomers");
   cJSON_AddNumberToObject (root, "version", 1);
@@ -59,11 +58,11 @@ print_isomers_json (const CwIsomerSet *set, CwEnergyUnit unit)
   cJSON_AddStringToObject (root, "caution", cw_caution_text ());
   for (guint i = 0; i < set->isomers->len; i++)
     {
-      const CwIsomer *iso = set->isomers->pdata[i];
-      cJSON *o = cJSON_CreateObject ();
-      cJSON *species = cJSON_AddArrayToObject (o, "species_energies");
-      cJSON *pop = cJSON_AddArrayToObject (o, "chair_populations");
-      cJSON *flags = cJSON_AddArrayToObject (o, "flags");
+      const CwIsomer  *iso = set->isomers->pdata[i];
+      cJSON           *o = cJSON_CreateObject ();
+      cJSON           *species = cJSON_AddArrayToObject (o, "species_energies");
+      cJSON           *pop = cJSON_AddArrayToObject (o, "chair_populations");
+      cJSON           *flags = cJSON_AddArrayToObject (o, "flags");
       g_autofree char *spec = cw_molecule_dup_spec (iso->molecule);
 
       cJSON_AddStringToObject (o, "configuration", iso->configuration);
@@ -115,10 +114,10 @@ cw_cli_isomers (int argc, char **argv)
   g_autoptr (CwData) data = NULL;
   g_autoptr (GPtrArray) docs = NULL;
   g_autoptr (CwIsomerSet) set = NULL;
-  CwConditions cond;
+  CwConditions      cond;
   const CwDocument *doc;
-  CwEnergyUnit unit;
-  int code = CW_EXIT_OK;
+  CwEnergyUnit      unit;
+  int               code = CW_EXIT_OK;
 
   cw_cli_input_add_options (context, &input, TRUE);
   if (!g_option_context_parse (context, &argc, &argv, &error))
@@ -159,28 +158,27 @@ int
 cw_cli_batch (int argc, char **argv)
 {
   g_autofree char *output = NULL, *temperature = NULL, *solvent = NULL, *format = NULL, *data_dir = NULL;
-  gboolean json = FALSE, quiet = FALSE;
-  GOptionEntry entries[] = {
-    { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write results to OUT.csv or OUT.json (default: CSV on standard output)"), "OUT" },
-    { "temperature", 't', 0, G_OPTION_ARG_STRING, &temperature, N_("Temperature with unit: 25C, -78 °C, 298.15K (default 25 °C)"), "T" },
-    { "solvent", 's', 0, G_OPTION_ARG_STRING, &solvent, N_("Solvent class: aprotic or protic"), "CLASS" },
-    { "json", 0, 0, G_OPTION_ARG_NONE, &json, N_("Write JSON whatever the output name"), NULL },
-    { "input-format", 0, 0, G_OPTION_ARG_STRING, &format, N_("smi or csv (default: from the name, else from the first line)"), "FORMAT" },
-    { "data-dir", 0, 0, G_OPTION_ARG_FILENAME, &data_dir, N_("Read groups.json and interactions.json from DIR"), "DIR" },
-    { "quiet", 'q', 0, G_OPTION_ARG_NONE, &quiet, N_("No progress line and no summary"), NULL },
-    { NULL }
-  };
+  gboolean         json = FALSE, quiet = FALSE;
+  GOptionEntry     entries[] = {
+        { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write results to OUT.csv or OUT.json (default: CSV on standard output)"), "OUT" },
+          { "temperature", 't', 0, G_OPTION_ARG_STRING, &temperature, N_("Temperature with unit: 25C, -78 °C, 298.15K (default 25 °C)"), "T" },
+            { "solvent", 's', 0, G_OPTION_ARG_STRING, &solvent, N_("Solvent class: aprotic or protic"), "CLASS" },
+              { "json", 0, 0, G_OPTION_ARG_NONE, &json, N_("Write JSON whatever the output name"), NULL },
+                { "input-format", 0, 0, G_OPTION_ARG_STRING, &format, N_("smi or csv (default: from the name, else from the first line)"), "FORMAT" },
+                  { "data-dir", 0, 0, G_OPTION_ARG_FILENAME, &data_dir, N_("Read groups.json and interactions.json from DIR"), "DIR" },
+                    { "quiet", 'q', 0, G_OPTION_ARG_NONE, &quiet, N_("No progress line and no summary"), NULL },
+                      { NULL } };
   g_autoptr (GOptionContext) context = g_option_context_new (_("IN.smi|IN.csv|- — analyse one compound per line"));
   g_autoptr (GError) error = NULL;
   g_autoptr (CwData) data = NULL;
   g_autofree char *part = NULL, *summary_text = NULL;
-  CwBatchOptions opt;
-  CwBatchSummary summary;
-  FILE *in = stdin, *out = stdout;
-  gboolean ok;
+  CwBatchOptions   opt;
+  CwBatchSummary   summary;
+  FILE            *in = stdin, *out = stdout;
+  gboolean         ok;
 
   g_option_context_set_description (context,
-    _("Input: SMILES lines with an optional name or id after the SMILES, or CSV with a header naming "
+                                    _("Input: SMILES lines with an optional name or id after the SMILES, or CSV with a header naming "
       "a “smiles” column and optionally “id” or “name”. Output columns: line, id, canonical SMILES, "
       "relative configuration, major chair, ΔG° and its σ (kcal/mol), K, chair populations, the "
       "interval of the major population for ΔG° ± 2σ, flags, and the error for a bad line. A SMILES "
@@ -191,8 +189,7 @@ cw_cli_batch (int argc, char **argv)
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "batch", error->message);
   if (argc != 2)
-    return cw_cli_usage_error (context, "batch", argc < 2 ? _("give an input file (or - for standard input)")
-                                                          : _("too many arguments"));
+    return cw_cli_usage_error (context, "batch", argc < 2 ? _("give an input file (or - for standard input)") : _("too many arguments"));
   cw_batch_options_init (&opt);
   opt.progress = !quiet;
   if (temperature && !cw_parse_temperature (temperature, &opt.temperature, NULL, &error))
@@ -234,8 +231,7 @@ cw_cli_batch (int argc, char **argv)
       ok = (fclose (out) == 0) && ok;
       if (ok && g_rename (part, output) != 0)
         {
-          g_set_error (&error, CW_CORE_ERROR, CW_CORE_ERROR_IO, _("cannot rename %s to %s: %s"), part, output,
-                       g_strerror (errno));
+          g_set_error (&error, CW_CORE_ERROR, CW_CORE_ERROR_IO, _("cannot rename %s to %s: %s"), part, output, g_strerror (errno));
           ok = FALSE;
         }
       if (!ok)

@@ -26,9 +26,9 @@
 
 typedef struct
 {
-  gint64 key[CW_SM_KEY_LEN];
-  guint16 len;   /* 0: empty */
-  char text[CACHE_TEXT];
+  gint64  key[CW_SM_KEY_LEN];
+  guint16 len; /* 0: empty */
+  char    text[CACHE_TEXT];
 } CacheEntry;
 
 /* The tags are checked first: a small array that stays in the processor cache, so a miss
@@ -36,26 +36,26 @@ typedef struct
 
 typedef struct
 {
-  const CwData *data;
+  const CwData         *data;
   const CwBatchOptions *opt;
-  CwConditions cond;
-  CwSmilesReader *reader;
-  FILE *out;
-  FILE *err;
-  char *obuf;
-  gsize olen;
-  gboolean write_failed;
-  CwMolecule mols[MAX_MOLS];
-  CwAnalysis an;
-  GString *scratch;
-  GString *notes;
-  CacheEntry *cache;
-  guint64 *tags;
-  CwBatchSummary *sum;
-  gboolean csv;
-  int smiles_col, id_col;
-  gboolean first_row;
-  gint64 last_progress;
+  CwConditions          cond;
+  CwSmilesReader       *reader;
+  FILE                 *out;
+  FILE                 *err;
+  char                 *obuf;
+  gsize                 olen;
+  gboolean              write_failed;
+  CwMolecule            mols[MAX_MOLS];
+  CwAnalysis            an;
+  GString              *scratch;
+  GString              *notes;
+  CacheEntry           *cache;
+  guint64              *tags;
+  CwBatchSummary       *sum;
+  gboolean              csv;
+  int                   smiles_col, id_col;
+  gboolean              first_row;
+  gint64                last_progress;
 } Batch;
 
 /* ---- output ---- */
@@ -96,10 +96,10 @@ static int
 fmt_fixed (char *buf, double x, int decimals)
 {
   static const double scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
-  guint64 v, ip, fp;
-  int n = 0;
-  char tmp[24];
-  int t = 0;
+  guint64             v, ip, fp;
+  int                 n = 0;
+  char                tmp[24];
+  int                 t = 0;
 
   if (!isfinite (x) || fabs (x) >= 1e12)
     return g_snprintf (buf, 32, "%.*g", decimals + 3, x);
@@ -210,24 +210,33 @@ append_num (GString *s, double x, int decimals)
 
 /* The part of a row that depends only on the molecule: SMILES … flags. */
 static void
+append_configuration (const CwMolecule *m, GString *s)
+{
+  gsize before = s->len;
+
+  cw_sm_append_configuration (m, s);
+  if (s->len == before && m->n_subs > 1)
+    {
+      /* only geminal pairs carry the relative configuration: name every slot instead */
+      g_autofree char *spec = cw_molecule_dup_spec (m);
+      g_string_append (s, spec);
+    }
+}
+
+/* The part of a row that depends only on the molecule: SMILES … flags. */
+static void
 format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
 {
-  g_autofree char *config = cw_molecule_dup_configuration (m);
-  char buf[40];
+  char    buf[40];
   guint32 seen = 0;
-  int n_flags = 0;
+  int     n_flags = 0;
 
-  if (config[0] == '\0' && m->n_subs > 1)
-    {
-      g_free (config);
-      config = cw_molecule_dup_spec (m);
-    }
   if (b->opt->json)
     {
       g_string_append (s, "\"smiles\":\"");
       cw_sm_reader_write_canonical (b->reader, m, s);
       g_string_append (s, "\",\"configuration\":\"");
-      g_string_append (s, config);
+      append_configuration (m, s);
       g_string_append (s, an->major ? "\",\"major_chair\":2,\"delta_g\":" : "\",\"major_chair\":1,\"delta_g\":");
       append_num (s, an->delta_g, 3);
       g_string_append (s, ",\"sigma\":");
@@ -248,7 +257,7 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
     {
       cw_sm_reader_write_canonical (b->reader, m, s);
       g_string_append_c (s, ',');
-      g_string_append (s, config);
+      append_configuration (m, s);
       g_string_append (s, an->major ? ",2," : ",1,");
       append_num (s, an->delta_g, 3);
       g_string_append_c (s, ',');
@@ -296,10 +305,10 @@ static const char *
 result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
 {
   CwRingTransform id = { 1, 1, FALSE };
-  gint64 key[CW_SM_KEY_LEN];
-  CacheEntry *e;
-  guint64 h;
-  guint slot;
+  gint64          key[CW_SM_KEY_LEN];
+  CacheEntry     *e;
+  guint64         h;
+  guint           slot;
 
   cw_sm_molecule_key (m, &id, key);
   h = key_hash (key);
@@ -331,7 +340,7 @@ static void
 row_start (Batch *b, guint64 line, const char *id, gsize id_len)
 {
   char buf[32];
-  int n = fmt_fixed (buf, (double) line, 0);
+  int  n = fmt_fixed (buf, (double) line, 0);
 
   if (b->opt->json)
     {
@@ -355,7 +364,7 @@ static void
 error_row (Batch *b, guint64 line, const char *id, gsize id_len, const char *message)
 {
   const char *nl = strchr (message, '\n');
-  gsize n = nl ? (gsize) (nl - message) : strlen (message);
+  gsize       n = nl ? (gsize) (nl - message) : strlen (message);
 
   b->sum->errors++;
   if (b->err)
@@ -380,7 +389,7 @@ process_compound (Batch *b, guint64 line, const char *smiles, gsize len, const c
 {
   g_autoptr (GError) error = NULL;
   CwSmilesInfo info;
-  int n;
+  int          n;
 
   b->sum->compounds++;
   if (b->notes)
@@ -396,7 +405,7 @@ process_compound (Batch *b, guint64 line, const char *smiles, gsize len, const c
   b->sum->salts += info.n_dropped > 0;
   for (int i = 0; i < n; i++)
     {
-      gsize tlen;
+      gsize       tlen;
       const char *text = result_text (b, &b->mols[i], &tlen, &error);
       if (text == NULL)
         {
@@ -433,7 +442,7 @@ process_compound (Batch *b, guint64 line, const char *smiles, gsize len, const c
 static int
 split_csv (char *line, gsize len, char **field, gsize *flen)
 {
-  int n = 0;
+  int   n = 0;
   gsize i = 0;
 
   while (n < MAX_FIELDS)
@@ -511,8 +520,8 @@ static void
 process_line (Batch *b, char *line, gsize len)
 {
   guint64 no = ++b->sum->lines;
-  char *smiles = line, *id = "";
-  gsize slen = len, ilen = 0;
+  char   *smiles = line, *id = "";
+  gsize   slen = len, ilen = 0;
 
   if (len && line[len - 1] == '\r')
     len--, slen--;
@@ -522,7 +531,7 @@ process_line (Batch *b, char *line, gsize len)
     {
       char *field[MAX_FIELDS];
       gsize flen[MAX_FIELDS];
-      int n = split_csv (line, len, field, flen);
+      int   n = split_csv (line, len, field, flen);
       if (no == 1 && b->smiles_col == -2)
         {
           if (is_header (field, flen, n, b))
@@ -573,15 +582,15 @@ progress (Batch *b, gboolean final)
     return;
   b->last_progress = now;
   fprintf (b->err, _("\r%s: %" G_GUINT64_FORMAT " lines, %" G_GUINT64_FORMAT " errors…"), b->opt->command,
-           b->sum->lines, b->sum->errors);
+                      b->sum->lines, b->sum->errors);
   fflush (b->err);
 }
 
 static gboolean
 detect_csv (Batch *b, const char *buf, gsize n)
 {
-  const char *nl = memchr (buf, '\n', n);
-  gsize len = nl ? (gsize) (nl - buf) : n;
+  const char      *nl = memchr (buf, '\n', n);
+  gsize            len = nl ? (gsize) (nl - buf) : n;
   g_autofree char *first = g_ascii_strdown (buf, len);
 
   return strstr (first, "smiles") != NULL && memchr (first, ',', len) != NULL;
@@ -632,14 +641,13 @@ cw_batch_options_init (CwBatchOptions *opt)
 }
 
 gboolean
-cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchOptions *opt,
-              CwBatchSummary *summary, GError **error)
+cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchOptions *opt, CwBatchSummary *summary, GError **error)
 {
-  Batch *b = g_new0 (Batch, 1);
-  char *ibuf = g_malloc (IN_SIZE + 1);
-  gsize have = 0;
+  Batch   *b = g_new0 (Batch, 1);
+  char    *ibuf = g_malloc (IN_SIZE + 1);
+  gsize    have = 0;
   gboolean eof = FALSE, ok = TRUE, skipping = FALSE;
-  gint64 t0 = g_get_monotonic_time ();
+  gint64   t0 = g_get_monotonic_time ();
 
   memset (summary, 0, sizeof *summary);
   b->data = data;
@@ -680,7 +688,7 @@ cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchO
             }
           if (summary->lines == 0 && have == 0 && n > 0)
             b->csv = opt->input == CW_BATCH_INPUT_CSV ||
-                      (opt->input == CW_BATCH_INPUT_AUTO && detect_csv (b, ibuf, n));
+                     (opt->input == CW_BATCH_INPUT_AUTO && detect_csv (b, ibuf, n));
           have += n;
         }
       for (;;)
@@ -741,13 +749,13 @@ cw_batch_summary_dup_text (const CwBatchSummary *s)
 
   g_string_append_printf (t, _("%" G_GUINT64_FORMAT " compounds in %" G_GUINT64_FORMAT " lines: %" G_GUINT64_FORMAT
                                " analysed (%" G_GUINT64_FORMAT " rows), %" G_GUINT64_FORMAT " with errors"),
-                          s->compounds, s->lines, s->analysed, s->rows, s->errors);
+                                s->compounds, s->lines, s->analysed, s->rows, s->errors);
   if (s->expanded)
     g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with open ring stereocentres (one row per cis/trans isomer)"),
-                            s->expanded);
+                                  s->expanded);
   if (s->salts)
     g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with parts left out (largest part kept)"), s->salts);
   g_string_append_printf (t, _("; %.2f s (%.0f compounds/s)"), s->seconds,
-                          s->seconds > 0 ? s->compounds / s->seconds : 0.0);
+                                s->seconds > 0 ? s->compounds / s->seconds : 0.0);
   return g_string_free (t, FALSE);
 }

@@ -20,31 +20,30 @@ typedef enum
 
 typedef struct
 {
-  double temperature;  /* K */
-  CwSolvent solvent;
+  double       temperature; /* K */
+  CwSolvent    solvent;
   CwBatchInput input;
-  gboolean json;       /* JSON document instead of CSV */
-  gboolean progress;   /* progress line on err (only when err is a terminal) */
-  const char *command; /* prefix for messages, e.g. "chairwise-calc batch" */
+  gboolean     json;     /* JSON document instead of CSV */
+  gboolean     progress; /* progress line on err (only when err is a terminal) */
+  const char  *command;  /* prefix for messages, e.g. "chairwise-calc batch" */
 } CwBatchOptions;
 
 typedef struct
 {
-  guint64 lines;      /* lines read */
-  guint64 compounds;  /* lines that held a compound */
-  guint64 analysed;   /* compounds analysed */
-  guint64 rows;       /* result rows written */
-  guint64 errors;     /* compounds that could not be analysed */
-  guint64 expanded;   /* compounds with open ring stereocentres (more than one row) */
-  guint64 salts;      /* compounds with parts left out */
-  double seconds;
+  guint64 lines;     /* lines read */
+  guint64 compounds; /* lines that held a compound */
+  guint64 analysed;  /* compounds analysed */
+  guint64 rows;      /* result rows written */
+  guint64 errors;    /* compounds that could not be analysed */
+  guint64 expanded;  /* compounds with open ring stereocentres (more than one row) */
+  guint64 salts;     /* compounds with parts left out */
+  double  seconds;
 } CwBatchSummary;
 
-void     cw_batch_options_init (CwBatchOptions *opt);
+void cw_batch_options_init (CwBatchOptions *opt);
 /* FALSE only when reading or writing fails (error set); bad lines do not fail the batch. */
-gboolean cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err,
-                       const CwBatchOptions *opt, CwBatchSummary *summary, GError **error);
+gboolean cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchOptions *opt, CwBatchSummary *summary, GError **error);
 /* "12 compounds in 12 lines: 11 analysed (13 rows), 1 error; 0.01 s" */
-char    *cw_batch_summary_dup_text (const CwBatchSummary *summary);
+char *cw_batch_summary_dup_text (const CwBatchSummary *summary);
 
 G_END_DECLS

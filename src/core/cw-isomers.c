@@ -19,7 +19,7 @@
 static void
 conformer_key (const CwMolecule *mol, int chair, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
 {
-  gint64 slot[CW_RING_SIZE + 1][2];
+  gint64   slot[CW_RING_SIZE + 1][2];
   gboolean swap = cw_sm_transform_swaps (t);
 
   for (int p = 0; p <= CW_RING_SIZE; p++)
@@ -104,11 +104,11 @@ static CwIsomer *
 make_isomer (const CwData *data, const CwMolecule *m, const CwConditions *cond, GError **error)
 {
   g_autoptr (CwMolecule) mol = cw_molecule_new ();
-  CwIsomer *iso;
-  CwMolecule mirror;
+  CwIsomer   *iso;
+  CwMolecule  mirror;
   CwAnalysis *mirror_an;
-  gint64 keys[4][CW_SM_KEY_LEN], km[CW_SM_KEY_LEN], kmm[CW_SM_KEY_LEN];
-  double energies[4], rt = CW_R_KCAL * cond->temperature;
+  gint64      keys[4][CW_SM_KEY_LEN], km[CW_SM_KEY_LEN], kmm[CW_SM_KEY_LEN];
+  double      energies[4], rt = CW_R_KCAL * cond->temperature;
 
   for (int i = 0; i < m->n_subs; i++)
     if (!cw_molecule_set (mol, m->subs[i].position, m->subs[i].face, m->subs[i].group, error))
@@ -136,7 +136,7 @@ make_isomer (const CwData *data, const CwMolecule *m, const CwConditions *cond, 
       {
         const CwMolecule *which = x == 0 ? iso->molecule : &mirror;
         const CwAnalysis *an = x == 0 ? &iso->analysis : mirror_an;
-        gboolean dup = FALSE;
+        gboolean          dup = FALSE;
         min_key (which, c, keys[iso->n_species]);
         for (int k = 0; k < iso->n_species && !dup; k++)
           dup = memcmp (keys[k], keys[iso->n_species], sizeof keys[k]) == 0;
@@ -160,7 +160,8 @@ static int
 compare_isomers (gconstpointer a, gconstpointer b)
 {
   const CwIsomer *x = *(CwIsomer *const *) a, *y = *(CwIsomer *const *) b;
-  return x->g < y->g ? -1 : x->g > y->g ? 1 : g_strcmp0 (x->smiles, y->smiles);
+  return x->g < y->g ? -1 : x->g > y->g ? 1
+                                        : g_strcmp0 (x->smiles, y->smiles);
 }
 
 /* Face assignment number bits over the stereo carbons; the first carbon stays as it is. */
@@ -168,7 +169,7 @@ static void
 assign_faces (const CwMolecule *base, const gboolean *relevant, guint bits, CwMolecule *out)
 {
   const CwGroup *slot[CW_RING_SIZE + 1][2];
-  int bit = 0;
+  int            bit = 0;
 
   memset (slot, 0, sizeof slot);
   out->n_subs = 0;
@@ -180,28 +181,27 @@ assign_faces (const CwMolecule *base, const gboolean *relevant, guint bits, CwMo
     }
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
-      gboolean flip = FALSE;
+      gboolean       flip = FALSE;
       const CwGroup *a = slot[p][0], *b = slot[p][1];
       if (b && cw_sm_group_rank (b) < cw_sm_group_rank (a))
         a = slot[p][1], b = slot[p][0];
       if (relevant[p])
         flip = (bits >> bit++) & 1;
       if (a)
-        out->subs[out->n_subs++] = (CwSubstituent) { a, p, flip ? CW_FACE_DOWN : CW_FACE_UP };
+        out->subs[out->n_subs++] = (CwSubstituent){ a, p, flip ? CW_FACE_DOWN : CW_FACE_UP };
       if (b)
-        out->subs[out->n_subs++] = (CwSubstituent) { b, p, flip ? CW_FACE_UP : CW_FACE_DOWN };
+        out->subs[out->n_subs++] = (CwSubstituent){ b, p, flip ? CW_FACE_UP : CW_FACE_DOWN };
     }
 }
 
 CwIsomerSet *
-cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution, const CwConditions *cond,
-                      GError **error)
+cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution, const CwConditions *cond, GError **error)
 {
   g_autoptr (CwIsomerSet) set = g_new0 (CwIsomerSet, 1);
   gboolean relevant[CW_RING_SIZE + 1];
-  gint64 seen[MAX_COMBOS][CW_SM_KEY_LEN];
-  int n_seen = 0, n_rel;
-  double g_min = G_MAXDOUBLE, h_min = G_MAXDOUBLE, z = 0, rt;
+  gint64   seen[MAX_COMBOS][CW_SM_KEY_LEN];
+  int      n_seen = 0, n_rel;
+  double   g_min = G_MAXDOUBLE, h_min = G_MAXDOUBLE, z = 0, rt;
 
   g_return_val_if_fail (data != NULL && constitution != NULL && cond != NULL, NULL);
   if (!cw_check_temperature (cond->temperature, error))
@@ -212,16 +212,16 @@ cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution, const 
   set->isomers = g_ptr_array_new_with_free_func ((GDestroyNotify) cw_isomer_free);
   {
     CwMolecule flat;
-    assign_faces (constitution, (gboolean[CW_RING_SIZE + 1]) { 0 }, 0, &flat);
+    assign_faces (constitution, (gboolean[CW_RING_SIZE + 1]){ 0 }, 0, &flat);
     n_rel = cw_sm_relevant_carbons (&flat, relevant);
   }
   set->n_stereo_carbons = n_rel;
   for (guint bits = 0; bits < (n_rel > 1 ? 1u << (n_rel - 1) : 1u); bits++)
     {
-      CwMolecule m, canon;
+      CwMolecule      m, canon;
       CwRingTransform t;
-      CwIsomer *iso;
-      gboolean dup = FALSE;
+      CwIsomer       *iso;
+      gboolean        dup = FALSE;
 
       assign_faces (constitution, relevant, bits << 1, &m);
       cw_sm_canonical_transform (&m, TRUE, &t);

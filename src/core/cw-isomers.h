@@ -19,34 +19,33 @@ G_BEGIN_DECLS
 
 typedef struct
 {
-  CwMolecule *molecule;   /* owned; numbered so that the first group is on C1, up */
-  char *smiles;           /* canonical isomeric SMILES */
-  char *configuration;    /* "cis", "trans", "r-1,c-3,t-4" or "" */
-  CwAnalysis analysis;    /* at the set's temperature */
-  gboolean chiral;        /* the isomer is not superimposable on its mirror image */
-  int n_species;          /* distinct chair species counted, 1–4 */
-  double species_energy[4]; /* their energies, kcal/mol */
-  double g;               /* conformer-averaged free energy, kcal/mol */
-  double h_mean;          /* population-weighted mean chair energy (enthalpy-like), kcal/mol */
-  double g_rel;           /* g − the lowest g of the set */
-  double h_rel;           /* h_mean − the lowest h_mean of the set */
-  double fraction;        /* equilibrium fraction among the isomers */
+  CwMolecule *molecule;          /* owned; numbered so that the first group is on C1, up */
+  char       *smiles;            /* canonical isomeric SMILES */
+  char       *configuration;     /* "cis", "trans", "r-1,c-3,t-4" or "" */
+  CwAnalysis  analysis;          /* at the set's temperature */
+  gboolean    chiral;            /* the isomer is not superimposable on its mirror image */
+  int         n_species;         /* distinct chair species counted, 1–4 */
+  double      species_energy[4]; /* their energies, kcal/mol */
+  double      g;                 /* conformer-averaged free energy, kcal/mol */
+  double      h_mean;            /* population-weighted mean chair energy (enthalpy-like), kcal/mol */
+  double      g_rel;             /* g − the lowest g of the set */
+  double      h_rel;             /* h_mean − the lowest h_mean of the set */
+  double      fraction;          /* equilibrium fraction among the isomers */
 } CwIsomer;
 
 typedef struct
 {
-  double temperature;
-  CwSolvent solvent;
-  GPtrArray *isomers;     /* CwIsomer*, owned, sorted by g */
-  int n_stereo_carbons;   /* carbons with one group or two different groups */
+  double     temperature;
+  CwSolvent  solvent;
+  GPtrArray *isomers;          /* CwIsomer*, owned, sorted by g */
+  int        n_stereo_carbons; /* carbons with one group or two different groups */
 } CwIsomerSet;
 
 /* Faces of constitution are ignored; every relative configuration is listed once. */
-CwIsomerSet *cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution,
-                                   const CwConditions *cond, GError **error);
+CwIsomerSet *cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution, const CwConditions *cond, GError **error);
 void         cw_isomer_set_free (CwIsomerSet *set);
 /* The reference and the counting rules above, in plain words, for output. */
-const char  *cw_isomers_method_text (void);
+const char *cw_isomers_method_text (void);
 
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (CwIsomerSet, cw_isomer_set_free)
 

@@ -23,10 +23,8 @@ cw_sm_group_rank (const CwGroup *g)
 
 /* source position of result position p under start s (1..6) and direction d (0: +1, 1: -1) */
 static const guint8 source_table[2][CW_RING_SIZE + 1][CW_RING_SIZE + 1] = {
-  { { 0 }, { 0, 1, 2, 3, 4, 5, 6 }, { 0, 2, 3, 4, 5, 6, 1 }, { 0, 3, 4, 5, 6, 1, 2 },
-    { 0, 4, 5, 6, 1, 2, 3 }, { 0, 5, 6, 1, 2, 3, 4 }, { 0, 6, 1, 2, 3, 4, 5 } },
-  { { 0 }, { 0, 1, 6, 5, 4, 3, 2 }, { 0, 2, 1, 6, 5, 4, 3 }, { 0, 3, 2, 1, 6, 5, 4 },
-    { 0, 4, 3, 2, 1, 6, 5 }, { 0, 5, 4, 3, 2, 1, 6 }, { 0, 6, 5, 4, 3, 2, 1 } },
+  { { 0 }, { 0, 1, 2, 3, 4, 5, 6 }, { 0, 2, 3, 4, 5, 6, 1 }, { 0, 3, 4, 5, 6, 1, 2 }, { 0, 4, 5, 6, 1, 2, 3 }, { 0, 5, 6, 1, 2, 3, 4 }, { 0, 6, 1, 2, 3, 4, 5 } },
+  { { 0 }, { 0, 1, 6, 5, 4, 3, 2 }, { 0, 2, 1, 6, 5, 4, 3 }, { 0, 3, 2, 1, 6, 5, 4 }, { 0, 4, 3, 2, 1, 6, 5 }, { 0, 5, 4, 3, 2, 1, 6 }, { 0, 6, 5, 4, 3, 2, 1 } },
 };
 
 static inline int
@@ -56,7 +54,7 @@ cw_sm_transform_swaps (const CwRingTransform *t)
 typedef struct
 {
   gint64 rank[CW_RING_SIZE + 1][2]; /* [position][0 up, 1 down] */
-  int count[CW_RING_SIZE + 1];
+  int    count[CW_RING_SIZE + 1];
 } Slots;
 
 static void
@@ -78,7 +76,7 @@ fill_slots (const CwMolecule *mol, Slots *s)
 static void
 key_from_slots (const Slots *s, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN])
 {
-  int swap = swaps_faces (t) ? 1 : 0;
+  int    swap = swaps_faces (t) ? 1 : 0;
   gint64 occupancy = 0;
 
   for (int p = 1; p <= CW_RING_SIZE; p++)
@@ -112,10 +110,10 @@ compare_keys (const gint64 *a, const gint64 *b)
 void
 cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransform *out)
 {
-  gint64 best[CW_SM_KEY_LEN], key[CW_SM_KEY_LEN];
+  gint64   best[CW_SM_KEY_LEN], key[CW_SM_KEY_LEN];
   gboolean have = FALSE;
-  Slots s;
-  int max_count = 0;
+  Slots    s;
+  int      max_count = 0;
 
   fill_slots (mol, &s);
   for (int p = 1; p <= CW_RING_SIZE; p++)
@@ -125,8 +123,14 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
       for (int st = 1; st <= CW_RING_SIZE; st++)
         {
           CwRingTransform t = { st, d ? -1 : 1, f };
-          /* only numberings that start on a carbon with the most groups can win */
+          gint64          occupancy = 0;
+          /* only numberings that start on a carbon with the most groups can win, and of
+           * those only the ones with the lowest locants (compared first, cheaply) */
           if (s.count[st] != max_count)
+            continue;
+          for (int p = 1; p <= CW_RING_SIZE; p++)
+            occupancy = occupancy * 3 + (2 - s.count[source_position (&t, p)]);
+          if (have && occupancy > best[0])
             continue;
           key_from_slots (&s, &t, key);
           if (!have || compare_keys (key, best) < 0)
@@ -142,8 +146,8 @@ void
 cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecule *out)
 {
   const CwSubstituent *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  gboolean swap = swaps_faces (t);
-  int n = 0;
+  gboolean             swap = swaps_faces (t);
+  int                  n = 0;
 
   for (int i = 0; i < in->n_subs; i++)
     slot[in->subs[i].position][in->subs[i].face == CW_FACE_UP ? 0 : 1] = &in->subs[i];
@@ -168,7 +172,7 @@ int
 cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1])
 {
   const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  int n = 0;
+  int            n = 0;
 
   for (int i = 0; i < mol->n_subs; i++)
     slot[mol->subs[i].position][mol->subs[i].face == CW_FACE_UP ? 0 : 1] = mol->subs[i].group;
@@ -179,4 +183,41 @@ cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 
       n += relevant[p];
     }
   return n;
+}
+
+void
+cw_sm_append_configuration (const CwMolecule *mol, GString *out)
+{
+  int faces[CW_RING_SIZE + 1], count[CW_RING_SIZE + 1] = { 0 };
+  int n = 0, ref = -1;
+
+  for (int i = 0; i < mol->n_subs; i++)
+    {
+      count[mol->subs[i].position]++;
+      faces[mol->subs[i].position] = mol->subs[i].face;
+    }
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    if (count[p] == 1)
+      {
+        n++;
+        if (ref < 0)
+          ref = p;
+      }
+  if (n < 2)
+    return;
+  if (n == 2)
+    {
+      for (int p = ref + 1; p <= CW_RING_SIZE; p++)
+        if (count[p] == 1)
+          g_string_append (out, faces[p] == faces[ref] ? "cis" : "trans");
+      return;
+    }
+  g_string_append (out, "r-");
+  g_string_append_c (out, '0' + ref);
+  for (int p = ref + 1; p <= CW_RING_SIZE; p++)
+    if (count[p] == 1)
+      {
+        g_string_append (out, faces[p] == faces[ref] ? ", c-" : ", t-");
+        g_string_append_c (out, '0' + p);
+      }
 }

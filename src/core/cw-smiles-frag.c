@@ -15,11 +15,11 @@
 
 typedef struct
 {
-  int n;
-  int atom[MAX_FRAG];   /* local -> graph index, BFS order from the root */
-  int dist[MAX_FRAG];
+  int     n;
+  int     atom[MAX_FRAG]; /* local -> graph index, BFS order from the root */
+  int     dist[MAX_FRAG];
   guint64 h[MAX_FRAG];
-  gint16 local[CW_SM_MAX_ATOMS]; /* graph -> local index, -1 outside */
+  gint16  local[CW_SM_MAX_ATOMS]; /* graph -> local index, -1 outside */
 } Frag;
 
 static inline guint64
@@ -52,7 +52,7 @@ collect (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark, Frag *f)
   f->local[root] = 0;
   while (head < f->n)
     {
-      int v = f->atom[head];
+      int             v = f->atom[head];
       const CwSmAtom *a = &g->atoms[v];
       for (int k = 0; k < a->degree; k++)
         {
@@ -71,12 +71,12 @@ static void
 hash_frag (const CwSmGraph *g, Frag *f)
 {
   guint64 next[MAX_FRAG];
-  int rounds = f->dist[f->n - 1] + 1;
+  int     rounds = f->dist[f->n - 1] + 1;
 
   for (int i = 0; i < f->n; i++)
     {
       const CwSmAtom *a = &g->atoms[f->atom[i]];
-      guint64 x = a->element | (guint64) a->aromatic << 8 | (guint64) (a->charge + 16) << 9 |
+      guint64         x = a->element | (guint64) a->aromatic << 8 | (guint64) (a->charge + 16) << 9 |
                   (guint64) a->isotope << 16 | (guint64) cw_sm_total_h (g, f->atom[i]) << 28 |
                   (guint64) (i == 0) << 34;
       f->h[i] = mix64 (x + 0x9e3779b97f4a7c15ull);
@@ -86,7 +86,7 @@ hash_frag (const CwSmGraph *g, Frag *f)
       for (int i = 0; i < f->n; i++)
         {
           const CwSmAtom *a = &g->atoms[f->atom[i]];
-          guint64 sum = 0;
+          guint64         sum = 0;
           for (int k = 0; k < a->degree; k++)
             {
               int j = f->local[a->nb[k]];
@@ -114,33 +114,31 @@ cw_sm_fragment_hash (const CwSmGraph *g, int root, const guint8 *mask, guint8 ma
 typedef struct
 {
   const CwSmGraph *g;
-  Frag *f;
-  int root;          /* local index 0 */
-  gboolean reverse;
-  int toward[MAX_FRAG];      /* local next hop toward the root (reverse mode) */
-  gboolean visited[MAX_FRAG];
-  int order[MAX_FRAG];       /* local atoms in DFS order */
-  int n_order;
-  int tree_parent[MAX_FRAG];
+  Frag            *f;
+  int              root; /* local index 0 */
+  gboolean         reverse;
+  int              toward[MAX_FRAG]; /* local next hop toward the root (reverse mode) */
+  gboolean         visited[MAX_FRAG];
+  int              order[MAX_FRAG]; /* local atoms in DFS order */
+  int              n_order;
+  int              tree_parent[MAX_FRAG];
   /* ring closures: pairs of local atoms */
-  int cl_a[CW_SM_MAX_CYCLES], cl_b[CW_SM_MAX_CYCLES], n_cl;
-  int cl_digit[CW_SM_MAX_CYCLES];
+  int      cl_a[CW_SM_MAX_CYCLES], cl_b[CW_SM_MAX_CYCLES], n_cl;
+  int      cl_digit[CW_SM_MAX_CYCLES];
   gboolean written[MAX_FRAG];
   gboolean digit_used[100];
-  int first_digit;
+  int      first_digit;
   GString *out;
 } Writer;
 
 static gboolean
 organic_ok (const CwSmGraph *g, const Frag *f, int atom, gboolean is_root)
 {
-  const CwSmAtom *a = &g->atoms[atom];
+  const CwSmAtom     *a = &g->atoms[atom];
   static const guint8 organic[] = { 5, 6, 7, 8, 9, 15, 16, 17, 35, 53 };
-  gboolean found = FALSE;
-  int v, h, expect = -1;
-  static const int norm[][4] = { { 5, 3, 0, 0 }, { 6, 4, 0, 0 }, { 7, 3, 5, 0 }, { 8, 2, 0, 0 },
-                                 { 9, 1, 0, 0 }, { 15, 3, 5, 0 }, { 16, 2, 4, 6 }, { 17, 1, 0, 0 },
-                                 { 35, 1, 0, 0 }, { 53, 1, 0, 0 } };
+  gboolean            found = FALSE;
+  int                 v, h, expect = -1;
+  static const int    norm[][4] = { { 5, 3, 0, 0 }, { 6, 4, 0, 0 }, { 7, 3, 5, 0 }, { 8, 2, 0, 0 }, { 9, 1, 0, 0 }, { 15, 3, 5, 0 }, { 16, 2, 4, 6 }, { 17, 1, 0, 0 }, { 35, 1, 0, 0 }, { 53, 1, 0, 0 } };
 
   for (guint k = 0; k < G_N_ELEMENTS (organic); k++)
     found |= organic[k] == a->element;
@@ -173,10 +171,10 @@ static void
 write_atom_token (Writer *w, int local)
 {
   const CwSmGraph *g = w->g;
-  int atom = w->f->atom[local];
-  const CwSmAtom *a = &g->atoms[atom];
-  const char *sym = cw_sm_element_symbol (a->element);
-  int h;
+  int              atom = w->f->atom[local];
+  const CwSmAtom  *a = &g->atoms[atom];
+  const char      *sym = cw_sm_element_symbol (a->element);
+  int              h;
 
   if (organic_ok (g, w->f, atom, local == 0))
     {
@@ -218,9 +216,15 @@ write_bond (Writer *w, int bond, int la, int lb)
 
   switch (bond)
     {
-    case CW_SM_BOND_DOUBLE: g_string_append_c (w->out, '='); break;
-    case CW_SM_BOND_TRIPLE: g_string_append_c (w->out, '#'); break;
-    case CW_SM_BOND_QUAD: g_string_append_c (w->out, '$'); break;
+    case CW_SM_BOND_DOUBLE:
+      g_string_append_c (w->out, '=');
+      break;
+    case CW_SM_BOND_TRIPLE:
+      g_string_append_c (w->out, '#');
+      break;
+    case CW_SM_BOND_QUAD:
+      g_string_append_c (w->out, '$');
+      break;
     case CW_SM_BOND_SINGLE:
       if (a->aromatic && b->aromatic)
         g_string_append_c (w->out, '-');
@@ -229,7 +233,8 @@ write_bond (Writer *w, int bond, int la, int lb)
       if (!(a->aromatic && b->aromatic))
         g_string_append_c (w->out, ':');
       break;
-    default: break;
+    default:
+      break;
     }
 }
 
@@ -248,7 +253,7 @@ static int
 sorted_neighbours (const Writer *w, int v, int *out)
 {
   const CwSmAtom *a = &w->g->atoms[w->f->atom[v]];
-  int n = 0;
+  int             n = 0;
 
   for (int k = 0; k < a->degree; k++)
     {
@@ -259,10 +264,11 @@ sorted_neighbours (const Writer *w, int v, int *out)
   for (int i = 1; i < n; i++)
     for (int k = i; k > 0; k--)
       {
-        int x = out[k - 1], y = out[k];
+        int      x = out[k - 1], y = out[k];
         gboolean x_last = w->reverse && w->toward[v] == x;
         gboolean y_last = w->reverse && w->toward[v] == y;
-        gboolean swap = x_last ? TRUE : y_last ? FALSE : w->f->h[y] < w->f->h[x];
+        gboolean swap = x_last ? TRUE : y_last ? FALSE
+                                               : w->f->h[y] < w->f->h[x];
         if (!swap)
           break;
         out[k - 1] = y;
@@ -354,12 +360,11 @@ emit (Writer *w, int v)
 }
 
 void
-cw_sm_fragment_write (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark,
-                      gboolean reverse, int first_digit, GString *out)
+cw_sm_fragment_write (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark, gboolean reverse, int first_digit, GString *out)
 {
-  Frag f;
+  Frag    f;
   Writer *w = g_new0 (Writer, 1);
-  int start = 0;
+  int     start = 0;
 
   collect (g, root, mask, mark, &f);
   hash_frag (g, &f);
@@ -374,7 +379,7 @@ cw_sm_fragment_write (const CwSmGraph *g, int root, const guint8 *mask, guint8 m
        * the root is the main chain, so the root is written last and the ring follows it */
       for (int i = 0; i < f.n; i++)
         {
-          int best = -1;
+          int             best = -1;
           const CwSmAtom *a = &g->atoms[f.atom[i]];
           w->toward[i] = -1;
           for (int k = 0; k < a->degree; k++)

@@ -13,40 +13,152 @@
 #include "cw-smiles-private.h"
 
 static const char *const element_symbols[] = {
-  "*", "H", "He", "Li", "Be", "B", "C", "N", "O", "F", "Ne", "Na", "Mg", "Al", "Si", "P", "S",
-  "Cl", "Ar", "K", "Ca", "Sc", "Ti", "V", "Cr", "Mn", "Fe", "Co", "Ni", "Cu", "Zn", "Ga", "Ge",
-  "As", "Se", "Br", "Kr", "Rb", "Sr", "Y", "Zr", "Nb", "Mo", "Tc", "Ru", "Rh", "Pd", "Ag", "Cd",
-  "In", "Sn", "Sb", "Te", "I", "Xe", "Cs", "Ba", "La", "Ce", "Pr", "Nd", "Pm", "Sm", "Eu", "Gd",
-  "Tb", "Dy", "Ho", "Er", "Tm", "Yb", "Lu", "Hf", "Ta", "W", "Re", "Os", "Ir", "Pt", "Au", "Hg",
-  "Tl", "Pb", "Bi", "Po", "At", "Rn", "Fr", "Ra", "Ac", "Th", "Pa", "U", "Np", "Pu", "Am", "Cm",
-  "Bk", "Cf", "Es", "Fm", "Md", "No", "Lr", "Rf", "Db", "Sg", "Bh", "Hs", "Mt", "Ds", "Rg", "Cn",
-  "Nh", "Fl", "Mc", "Lv", "Ts", "Og",
+  "*",
+  "H",
+  "He",
+  "Li",
+  "Be",
+  "B",
+  "C",
+  "N",
+  "O",
+  "F",
+  "Ne",
+  "Na",
+  "Mg",
+  "Al",
+  "Si",
+  "P",
+  "S",
+  "Cl",
+  "Ar",
+  "K",
+  "Ca",
+  "Sc",
+  "Ti",
+  "V",
+  "Cr",
+  "Mn",
+  "Fe",
+  "Co",
+  "Ni",
+  "Cu",
+  "Zn",
+  "Ga",
+  "Ge",
+  "As",
+  "Se",
+  "Br",
+  "Kr",
+  "Rb",
+  "Sr",
+  "Y",
+  "Zr",
+  "Nb",
+  "Mo",
+  "Tc",
+  "Ru",
+  "Rh",
+  "Pd",
+  "Ag",
+  "Cd",
+  "In",
+  "Sn",
+  "Sb",
+  "Te",
+  "I",
+  "Xe",
+  "Cs",
+  "Ba",
+  "La",
+  "Ce",
+  "Pr",
+  "Nd",
+  "Pm",
+  "Sm",
+  "Eu",
+  "Gd",
+  "Tb",
+  "Dy",
+  "Ho",
+  "Er",
+  "Tm",
+  "Yb",
+  "Lu",
+  "Hf",
+  "Ta",
+  "W",
+  "Re",
+  "Os",
+  "Ir",
+  "Pt",
+  "Au",
+  "Hg",
+  "Tl",
+  "Pb",
+  "Bi",
+  "Po",
+  "At",
+  "Rn",
+  "Fr",
+  "Ra",
+  "Ac",
+  "Th",
+  "Pa",
+  "U",
+  "Np",
+  "Pu",
+  "Am",
+  "Cm",
+  "Bk",
+  "Cf",
+  "Es",
+  "Fm",
+  "Md",
+  "No",
+  "Lr",
+  "Rf",
+  "Db",
+  "Sg",
+  "Bh",
+  "Hs",
+  "Mt",
+  "Ds",
+  "Rg",
+  "Cn",
+  "Nh",
+  "Fl",
+  "Mc",
+  "Lv",
+  "Ts",
+  "Og",
 };
 
 #define N_ELEMENTS ((int) G_N_ELEMENTS (element_symbols))
 
 typedef struct
 {
-  gint16 atom;  /* -1 when the ring number is free */
-  gint8 slot;   /* the neighbour slot reserved on atom */
-  guint8 bond;  /* bond written with the opening digit, 0 for none */
+  gint16  atom; /* -1 when the ring number is free */
+  gint8   slot; /* the neighbour slot reserved on atom */
+  guint8  bond; /* bond written with the opening digit, 0 for none */
   guint16 pos;
 } RingOpen;
 
 typedef struct
 {
-  CwSmGraph *g;
+  CwSmGraph  *g;
   const char *s;
-  int len;
-  int i;
-  int prev;
-  int bond;      /* pending bond order, 0 for none */
-  int bond_pos;
-  int stack[CW_SM_MAX_ATOMS];
-  int stack_pos[CW_SM_MAX_ATOMS];
-  int depth;
-  RingOpen ring[100];
-  int n_open;
+  int         len;
+  int         i;
+  int         prev;
+  int         bond; /* pending bond order, 0 for none */
+  int         bond_pos;
+  int         stack[CW_SM_MAX_ATOMS];
+  int         stack_pos[CW_SM_MAX_ATOMS];
+  int         depth;
+  RingOpen    ring[100];
+  int         n_open;
+  int         part_start; /* first atom after the last ‘.’ */
 } Parser;
 
 const char *
@@ -56,17 +168,17 @@ cw_sm_element_symbol (int z)
 }
 
 void
-cw_sm_set_error (GError    **error,
-                 int         code,
+cw_sm_set_error (GError         **error,
+                 int              code,
                  const CwSmGraph *g,
-                 int         pos,
-                 const char *format,
+                 int              pos,
+                 const char      *format,
                  ...)
 {
-  va_list ap;
+  va_list          ap;
   g_autofree char *what = NULL;
   g_autofree char *excerpt = NULL;
-  int from, to;
+  int              from, to;
 
   if (g != NULL)
     ((CwSmGraph *) g)->error_pos = pos;
@@ -84,9 +196,7 @@ cw_sm_set_error (GError    **error,
   from = MAX (0, pos - 30);
   to = MIN (g->text_len, pos + 30);
   excerpt = g_strndup (g->text + from, to - from);
-  g_set_error (error, CW_CORE_ERROR, code, _("SMILES, character %d: %s\n  %s%s\n  %*s^"),
-               pos + 1, what, from > 0 ? "…" : "", excerpt,
-               (int) (pos - from + (from > 0 ? 1 : 0)), "");
+  g_set_error (error, CW_CORE_ERROR, code, _("SMILES, character %d: %s\n  %s%s\n  %*s^"), pos + 1, what, from > 0 ? "…" : "", excerpt, (int) (pos - from + (from > 0 ? 1 : 0)), "");
 }
 
 static int
@@ -144,12 +254,18 @@ lookup_symbol (const char *s, int n)
   if (n == 1)
     switch (s[0])
       {
-      case 'C': return 6;
-      case 'N': return 7;
-      case 'O': return 8;
-      case 'H': return 1;
-      case 'S': return 16;
-      default: break;
+      case 'C':
+        return 6;
+      case 'N':
+        return 7;
+      case 'O':
+        return 8;
+      case 'H':
+        return 1;
+      case 'S':
+        return 16;
+      default:
+        break;
       }
   return lookup_symbol_slow (s, n);
 }
@@ -159,7 +275,7 @@ static gboolean
 parse_bracket (Parser *p, CwSmAtom *a, GError **error)
 {
   const char *s = p->s;
-  int start = p->i, i = p->i + 1, z = -1, close;
+  int         start = p->i, i = p->i + 1, z = -1, close;
 
   for (close = i; close < p->len && s[close] != ']'; close++)
     if (s[close] == '[' || s[close] == '.' || s[close] == '(')
@@ -237,7 +353,7 @@ parse_bracket (Parser *p, CwSmAtom *a, GError **error)
     }
   if (i < close && (s[i] == '+' || s[i] == '-'))
     {
-      int sign = s[i] == '+' ? 1 : -1, n = 1;
+      int  sign = s[i] == '+' ? 1 : -1, n = 1;
       char c = s[i++];
       if (i < close && g_ascii_isdigit (s[i]))
         {
@@ -275,7 +391,7 @@ static gboolean
 parse_organic (Parser *p, CwSmAtom *a, GError **error)
 {
   const char *s = p->s;
-  char c = s[p->i], d = p->i + 1 < p->len ? s[p->i + 1] : 0;
+  char        c = s[p->i], d = p->i + 1 < p->len ? s[p->i + 1] : 0;
 
   a->hcount = -1;
   switch (c)
@@ -292,24 +408,50 @@ parse_organic (Parser *p, CwSmAtom *a, GError **error)
       else
         a->element = 5;
       break;
-    case 'N': a->element = 7; break;
-    case 'O': a->element = 8; break;
-    case 'P': a->element = 15; break;
-    case 'S': a->element = 16; break;
-    case 'F': a->element = 9; break;
-    case 'I': a->element = 53; break;
-    case 'b': a->element = 5, a->aromatic = TRUE; break;
-    case 'c': a->element = 6, a->aromatic = TRUE; break;
-    case 'n': a->element = 7, a->aromatic = TRUE; break;
-    case 'o': a->element = 8, a->aromatic = TRUE; break;
-    case 'p': a->element = 15, a->aromatic = TRUE; break;
-    case 's': a->element = 16, a->aromatic = TRUE; break;
-    case '*': a->element = 0; break;
+    case 'N':
+      a->element = 7;
+      break;
+    case 'O':
+      a->element = 8;
+      break;
+    case 'P':
+      a->element = 15;
+      break;
+    case 'S':
+      a->element = 16;
+      break;
+    case 'F':
+      a->element = 9;
+      break;
+    case 'I':
+      a->element = 53;
+      break;
+    case 'b':
+      a->element = 5, a->aromatic = TRUE;
+      break;
+    case 'c':
+      a->element = 6, a->aromatic = TRUE;
+      break;
+    case 'n':
+      a->element = 7, a->aromatic = TRUE;
+      break;
+    case 'o':
+      a->element = 8, a->aromatic = TRUE;
+      break;
+    case 'p':
+      a->element = 15, a->aromatic = TRUE;
+      break;
+    case 's':
+      a->element = 16, a->aromatic = TRUE;
+      break;
+    case '*':
+      a->element = 0;
+      break;
     default:
       cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i,
                        g_ascii_isalpha (c) ? _("‘%c’ is not an atom of the organic subset; write it in brackets, e.g. [%c]")
                                            : _("unexpected character ‘%c’"),
-                       c, c);
+                                                c, c);
       return FALSE;
     }
   p->i++;
@@ -320,8 +462,8 @@ static gboolean
 parse_atom (Parser *p, GError **error)
 {
   CwSmGraph *g = p->g;
-  CwSmAtom *a;
-  int idx = g->n_atoms, start = p->i;
+  CwSmAtom  *a;
+  int        idx = g->n_atoms, start = p->i;
 
   if (idx >= CW_SM_MAX_ATOMS)
     {
@@ -361,8 +503,8 @@ static gboolean
 parse_ring_bond (Parser *p, GError **error)
 {
   const char *s = p->s;
-  int pos = p->i, num;
-  RingOpen *r;
+  int         pos = p->i, num;
+  RingOpen   *r;
 
   if (p->prev < 0)
     {
@@ -396,8 +538,15 @@ parse_ring_bond (Parser *p, GError **error)
   else
     {
       CwSmAtom *o = &p->g->atoms[r->atom];
-      int bond;
+      int       bond;
 
+      if (p->part_start > r->atom)
+        {
+          /* legal OpenSMILES, but it hides one molecule behind a '.': not read here */
+          cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, p->g, pos,
+                           _("ring bond %d joins parts separated by ‘.’; write them as one part"), num);
+          return FALSE;
+        }
       if (r->atom == p->prev)
         {
           cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, pos, _("ring bond %d joins an atom to itself"), num);
@@ -416,7 +565,8 @@ parse_ring_bond (Parser *p, GError **error)
                              _("ring bond %d joins two atoms that are already bonded"), num);
             return FALSE;
           }
-      bond = r->bond ? r->bond : p->bond ? p->bond : default_bond (p, r->atom, p->prev);
+      bond = r->bond ? r->bond : p->bond ? p->bond
+                                         : default_bond (p, r->atom, p->prev);
       o->nb[r->slot] = p->prev;
       o->bond[r->slot] = bond;
       if (add_neighbour (p, p->prev, r->atom, bond, error) < 0)
@@ -426,7 +576,7 @@ parse_ring_bond (Parser *p, GError **error)
           cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, p->g, pos, _("too many rings"));
           return FALSE;
         }
-      p->g->closures[p->g->n_closures++] = (CwSmClosure) { r->atom, p->prev, pos };
+      p->g->closures[p->g->n_closures++] = (CwSmClosure){ r->atom, p->prev, pos };
       r->atom = -1;
       p->n_open--;
     }
@@ -439,12 +589,20 @@ bond_from_char (char c)
 {
   switch (c)
     {
-    case '-': case '/': case '\\': return CW_SM_BOND_SINGLE;
-    case '=': return CW_SM_BOND_DOUBLE;
-    case '#': return CW_SM_BOND_TRIPLE;
-    case '$': return CW_SM_BOND_QUAD;
-    case ':': return CW_SM_BOND_AROMATIC;
-    default: return 0;
+    case '-':
+    case '/':
+    case '\\':
+      return CW_SM_BOND_SINGLE;
+    case '=':
+      return CW_SM_BOND_DOUBLE;
+    case '#':
+      return CW_SM_BOND_TRIPLE;
+    case '$':
+      return CW_SM_BOND_QUAD;
+    case ':':
+      return CW_SM_BOND_AROMATIC;
+    default:
+      return 0;
     }
 }
 
@@ -454,7 +612,7 @@ parse_loop (Parser *p, GError **error)
   while (p->i < p->len)
     {
       char c = p->s[p->i];
-      int b;
+      int  b;
 
       if (c == '(')
         {
@@ -508,6 +666,7 @@ parse_loop (Parser *p, GError **error)
             }
           p->prev = -1;
           p->g->n_dots++;
+          p->part_start = p->g->n_atoms;
           p->i++;
         }
       else if (!parse_atom (p, error))
@@ -548,7 +707,7 @@ int
 cw_sm_atom_valence (const CwSmGraph *g, int atom)
 {
   const CwSmAtom *a = &g->atoms[atom];
-  int v = 0;
+  int             v = 0;
 
   for (int k = 0; k < a->degree; k++)
     v += a->bond[k] == CW_SM_BOND_AROMATIC ? 1 : a->bond[k];
@@ -559,11 +718,11 @@ cw_sm_atom_valence (const CwSmGraph *g, int atom)
 static void
 compute_hcount (CwSmGraph *g, int atom)
 {
-  CwSmAtom *a = &g->atoms[atom];
+  CwSmAtom        *a = &g->atoms[atom];
   static const int v_b[] = { 3, 0 }, v_c[] = { 4, 0 }, v_n[] = { 3, 5, 0 }, v_o[] = { 2, 0 },
                    v_p[] = { 3, 5, 0 }, v_s[] = { 2, 4, 6, 0 }, v_x[] = { 1, 0 };
   const int *vals;
-  int v = cw_sm_atom_valence (g, atom);
+  int        v = cw_sm_atom_valence (g, atom);
 
   if (g->fragment && atom == 0)
     v++;
@@ -571,14 +730,33 @@ compute_hcount (CwSmGraph *g, int atom)
     v++;
   switch (a->element)
     {
-    case 5: vals = v_b; break;
-    case 6: vals = v_c; break;
-    case 7: vals = v_n; break;
-    case 8: vals = v_o; break;
-    case 15: vals = v_p; break;
-    case 16: vals = v_s; break;
-    case 9: case 17: case 35: case 53: vals = v_x; break;
-    default: a->hcount = 0; return;
+    case 5:
+      vals = v_b;
+      break;
+    case 6:
+      vals = v_c;
+      break;
+    case 7:
+      vals = v_n;
+      break;
+    case 8:
+      vals = v_o;
+      break;
+    case 15:
+      vals = v_p;
+      break;
+    case 16:
+      vals = v_s;
+      break;
+    case 9:
+    case 17:
+    case 35:
+    case 53:
+      vals = v_x;
+      break;
+    default:
+      a->hcount = 0;
+      return;
     }
   a->hcount = 0;
   for (; *vals; vals++)
@@ -600,7 +778,7 @@ int
 cw_sm_total_h (const CwSmGraph *g, int atom)
 {
   const CwSmAtom *a = &g->atoms[atom];
-  int h = a->hcount;
+  int             h = a->hcount;
 
   for (int k = 0; k < a->degree; k++)
     if (cw_sm_is_hydrogen (g, a->nb[k]))
@@ -627,6 +805,7 @@ cw_sm_parse (CwSmGraph *g, const char *text, int len, gboolean fragment, GError 
   p.bond = 0;
   p.depth = 0;
   p.n_open = 0;
+  p.part_start = 0;
   memset (p.ring, 0xff, sizeof p.ring); /* every atom field -1: free */
   if (!parse_loop (&p, error) || !check_end (&p, error))
     return FALSE;

@@ -33,81 +33,82 @@ typedef enum
 
 typedef struct
 {
-  guint8 element; /* atomic number; 0 for '*' */
-  guint8 aromatic;
-  guint8 bracket;
-  guint8 chirality;
-  gint8 charge;
-  gint8 hcount;   /* hydrogens written in brackets, or computed for the organic subset */
-  gint8 h_slot;   /* where an implicit H stands in the written order; -1 when none */
-  guint8 degree;
+  guint8  element; /* atomic number; 0 for '*' */
+  guint8  aromatic;
+  guint8  bracket;
+  guint8  chirality;
+  gint8   charge;
+  gint8   hcount; /* hydrogens written in brackets, or computed for the organic subset */
+  gint8   h_slot; /* where an implicit H stands in the written order; -1 when none */
+  guint8  degree;
   guint16 isotope;
-  gint16 parent;  /* atom it was bonded to by a chain or branch bond; -1 for a first atom */
+  gint16  parent; /* atom it was bonded to by a chain or branch bond; -1 for a first atom */
   guint16 pos;    /* offset of the atom in the text */
   guint16 len;    /* length of its token */
-  gint16 nb[CW_SM_MAX_NB];
-  guint8 bond[CW_SM_MAX_NB];
+  gint16  nb[CW_SM_MAX_NB];
+  guint8  bond[CW_SM_MAX_NB];
 } CwSmAtom;
 
 typedef struct
 {
-  gint16 a, b;       /* a opened the ring bond, b closed it */
-  guint16 pos;       /* offset of the closing digit */
+  gint16  a, b; /* a opened the ring bond, b closed it */
+  guint16 pos;  /* offset of the closing digit */
 } CwSmClosure;
 
 typedef struct
 {
-  CwSmAtom atoms[CW_SM_MAX_ATOMS];
-  int n_atoms;
+  CwSmAtom    atoms[CW_SM_MAX_ATOMS];
+  int         n_atoms;
   CwSmClosure closures[CW_SM_MAX_CYCLES];
-  int n_closures;
-  int n_dots;
-  const char *text;  /* borrowed, for messages */
-  int text_len;
-  gboolean fragment; /* parsing a group fragment: the first atom has one more bond (to the ring) */
-  int error_pos;     /* offset named by the last error, -1 */
+  int         n_closures;
+  int         n_dots;
+  const char *text; /* borrowed, for messages */
+  int         text_len;
+  gboolean    fragment;  /* parsing a group fragment: the first atom has one more bond (to the ring) */
+  int         error_pos; /* offset named by the last error, -1 */
 } CwSmGraph;
 
 /* cw-smiles-parse.c */
-gboolean cw_sm_parse (CwSmGraph *g, const char *text, int len, gboolean fragment, GError **error);
-int      cw_sm_atom_valence (const CwSmGraph *g, int atom); /* sum of bond orders, aromatic = 1 */
-gboolean cw_sm_is_hydrogen (const CwSmGraph *g, int atom); /* a plain [H] atom */
-int      cw_sm_total_h (const CwSmGraph *g, int atom);     /* hcount + [H] neighbours */
+gboolean    cw_sm_parse (CwSmGraph *g, const char *text, int len, gboolean fragment, GError **error);
+int         cw_sm_atom_valence (const CwSmGraph *g, int atom); /* sum of bond orders, aromatic = 1 */
+gboolean    cw_sm_is_hydrogen (const CwSmGraph *g, int atom);  /* a plain [H] atom */
+int         cw_sm_total_h (const CwSmGraph *g, int atom);      /* hcount + [H] neighbours */
 const char *cw_sm_element_symbol (int z);
-void     cw_sm_perceive_aromatic_rings (CwSmGraph *g);
-void     cw_sm_set_error (GError **error, int code, const CwSmGraph *g, int pos, const char *format, ...)
+void        cw_sm_perceive_aromatic_rings (CwSmGraph *g);
+void        cw_sm_set_error (GError **error, int code, const CwSmGraph *g, int pos, const char *format, ...)
   G_GNUC_PRINTF (5, 6);
 
 /* cw-smiles-frag.c: rooted fragments. mask[atom] == mark selects the fragment's atoms. */
-guint64  cw_sm_fragment_hash (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark);
+guint64 cw_sm_fragment_hash (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark);
 /* Writes the fragment as SMILES starting at root (or ending at root when reverse). */
-void     cw_sm_fragment_write (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark,
-                               gboolean reverse, int first_digit, GString *out);
+void cw_sm_fragment_write (const CwSmGraph *g, int root, const guint8 *mask, guint8 mark, gboolean reverse, int first_digit, GString *out);
 
 /* cw-smiles-canon.c: ring numberings. A transform maps position p (1..6) of the result to position
  * start + dir * (p - 1) of the source; dir = -1 also swaps the faces (turning the ring over keeps
  * the molecule itself; a face swap alone would give its mirror image). */
 typedef struct
 {
-  int start;   /* 1..6 */
-  int dir;     /* +1 or -1 */
-  gboolean flip; /* swap up and down */
+  int      start; /* 1..6 */
+  int      dir;   /* +1 or -1 */
+  gboolean flip;  /* swap up and down */
 } CwRingTransform;
 
 /* The numbering every reader and writer uses: lowest locants, then group order, then faces.
  * mirror: also allow the face swap alone (relative configuration: enantiomers count as one). */
-void     cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransform *out);
-void     cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecule *out);
+void cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransform *out);
+void cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecule *out);
 /* Writes a key of the molecule under t into key[CW_SM_KEY_LEN]; equal keys mean equal molecules. */
 #define CW_SM_KEY_LEN 13
-void     cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN]);
+void cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN]);
 /* Order of groups in canonical keys: table order, custom groups after the table. */
-gint64   cw_sm_group_rank (const CwGroup *group);
+gint64 cw_sm_group_rank (const CwGroup *group);
 /* The source position of result position p (1..6), and whether faces are swapped. */
 int      cw_sm_transform_source (const CwRingTransform *t, int p);
 gboolean cw_sm_transform_swaps (const CwRingTransform *t);
+/* Appends what cw_molecule_dup_configuration returns, without allocating. */
+void cw_sm_append_configuration (const CwMolecule *mol, GString *out);
 /* Stereo-relevant carbons: one group and an H, or two different groups. */
-int      cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1]);
+int cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1]);
 /* The chair species of a relative configuration, counted as cw-isomers.h explains. */
 
 /* The group table read as fragments (cw-smiles.c): rooted hash -> group, and each group's
@@ -116,49 +117,44 @@ int      cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RIN
 typedef struct
 {
   const CwGroupTable *table;
-  guint n_groups;
-  const CwGroup **groups;
-  char **fwd;
-  char **rev;
-  guint64 slot_hash[CW_SM_INDEX_SLOTS];
-  gint16 slot_group[CW_SM_INDEX_SLOTS];
-  GString *problems; /* groups whose fragment could not be read, one per line */
+  guint               n_groups;
+  const CwGroup     **groups;
+  char              **fwd;
+  char              **rev;
+  guint64             slot_hash[CW_SM_INDEX_SLOTS];
+  gint16              slot_group[CW_SM_INDEX_SLOTS];
+  GString            *problems; /* groups whose fragment could not be read, one per line */
 } CwSmIndex;
 
 CwSmIndex     *cw_sm_index_new (const CwGroupTable *table);
 void           cw_sm_index_free (CwSmIndex *index);
 const CwGroup *cw_sm_index_lookup (const CwSmIndex *index, guint64 hash);
 /* fwd/rev strings of any group: from the index when it holds the group, else computed. */
-void           cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index,
-                                    char **fwd, char **rev, gboolean *owned);
+void cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index, char **fwd, char **rev, gboolean *owned);
 
-typedef struct _CwSmilesInfo CwSmilesInfo;
+typedef struct _CwSmilesInfo   CwSmilesInfo;
 typedef struct _CwSmilesReader CwSmilesReader;
 
 /* cw-smiles-read.c: the whole reading; returns the number of molecules or -1 (error set). */
-int      cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len,
-                     CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes,
-                     GError **error);
+int cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error);
 
 /* The raw reading, for tests: graph atom indices (text order) of the ring and of each group's
  * first atom, and each group's face relative to the ring as read (-1 when not written). */
 typedef struct
 {
-  int ring_atom[CW_RING_SIZE];
-  int root_atom[CW_MAX_SUBS];
-  int ring_index[CW_MAX_SUBS];
-  int face[CW_MAX_SUBS];
+  int            ring_atom[CW_RING_SIZE];
+  int            root_atom[CW_MAX_SUBS];
+  int            ring_index[CW_MAX_SUBS];
+  int            face[CW_MAX_SUBS];
   const CwGroup *group[CW_MAX_SUBS];
 } CwSmDetail;
-int      cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text,
-                            int len, CwSmDetail *detail, GError **error);
-int      cw_sm_reader_read_detail (CwSmilesReader *reader, const char *text, CwSmDetail *detail,
-                                   GError **error);
+int cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len, CwSmDetail *detail, GError **error);
+int cw_sm_reader_read_detail (CwSmilesReader *reader, const char *text, CwSmDetail *detail, GError **error);
 
 /* cw-smiles-write.c: canonical isomeric SMILES of a molecule (index may be NULL). */
-void     cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *out);
+void cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *out);
 /* The same for a molecule already numbered canonically (as the reader returns them). */
-void     cw_sm_write_canonical (const CwMolecule *mol, const CwSmIndex *index, GString *out);
-void     cw_sm_reader_write_canonical (CwSmilesReader *reader, const CwMolecule *mol, GString *out);
+void cw_sm_write_canonical (const CwMolecule *mol, const CwSmIndex *index, GString *out);
+void cw_sm_reader_write_canonical (CwSmilesReader *reader, const CwMolecule *mol, GString *out);
 
 G_END_DECLS

@@ -18,23 +18,23 @@
 
 typedef struct
 {
-  CwSmGraph *g;
-  guint8 *mask;
+  CwSmGraph       *g;
+  guint8          *mask;
   const CwSmIndex *index;
-  gint16 comp[CW_SM_MAX_ATOMS];
-  gint16 depth[CW_SM_MAX_ATOMS];
-  guint32 member[CW_SM_MAX_ATOMS]; /* bit c: atom lies on cycle c */
-  int cycle[CW_SM_MAX_CYCLES][CW_SM_MAX_ATOMS];
-  int cycle_len[CW_SM_MAX_CYCLES];
-  int n_cycles;
-  int keep;                        /* component kept */
-  int ring[CW_RING_SIZE];          /* graph atoms, cyclic order */
-  int n_subs;
-  int sub_ring[CW_MAX_SUBS];       /* 0..5 */
-  int sub_atom[CW_MAX_SUBS];
-  const CwGroup *sub_group[CW_MAX_SUBS];
-  int sub_face[CW_MAX_SUBS];       /* CwFace, or -1 when not written */
-  gboolean inner_stereo;
+  gint16           comp[CW_SM_MAX_ATOMS];
+  gint16           depth[CW_SM_MAX_ATOMS];
+  guint32          member[CW_SM_MAX_ATOMS]; /* bit c: atom lies on cycle c */
+  int              cycle[CW_SM_MAX_CYCLES][CW_SM_MAX_ATOMS];
+  int              cycle_len[CW_SM_MAX_CYCLES];
+  int              n_cycles;
+  int              keep;               /* component kept */
+  int              ring[CW_RING_SIZE]; /* graph atoms, cyclic order */
+  int              n_subs;
+  int              sub_ring[CW_MAX_SUBS]; /* 0..5 */
+  int              sub_atom[CW_MAX_SUBS];
+  const CwGroup   *sub_group[CW_MAX_SUBS];
+  int              sub_face[CW_MAX_SUBS]; /* CwFace, or -1 when not written */
+  gboolean         inner_stereo;
 } Reading;
 
 /* ---- parts ---- */
@@ -43,11 +43,11 @@ static int
 choose_component (Reading *r, GString *notes, CwSmilesInfo *info)
 {
   CwSmGraph *g = r->g;
-  int queue[CW_SM_MAX_ATOMS], n_comp = 0, best = 0, best_heavy = -1, heavy[CW_SM_MAX_ATOMS];
+  int        queue[CW_SM_MAX_ATOMS], n_comp = 0, best = 0, best_heavy = -1, heavy[CW_SM_MAX_ATOMS];
 
   if (g->n_dots == 0)
     {
-      /* one part (ring bonds cannot join parts that the text does not separate) */
+      /* one part: the parser refuses ring bonds across a '.' */
       for (int i = 0; i < g->n_atoms; i++)
         r->comp[i] = 0;
       r->keep = 0;
@@ -84,7 +84,7 @@ choose_component (Reading *r, GString *notes, CwSmilesInfo *info)
   if (n_comp > 1 && notes)
     {
       g_string_append_printf (notes, _("The SMILES has %d disconnected parts; kept the largest (%d heavy atoms) and left out:"),
-                              n_comp, best_heavy);
+                                        n_comp, best_heavy);
       for (int c = 0; c < n_comp; c++)
         {
           int from = G_MAXINT, to = 0;
@@ -138,7 +138,7 @@ find_cycles (Reading *r)
   r->n_cycles = 0;
   for (int c = 0; c < g->n_closures; c++)
     {
-      int a = g->closures[c].a, b = g->closures[c].b, up[CW_SM_MAX_ATOMS], n_up = 0, down[CW_SM_MAX_ATOMS], n_down = 0;
+      int  a = g->closures[c].a, b = g->closures[c].b, up[CW_SM_MAX_ATOMS], n_up = 0, down[CW_SM_MAX_ATOMS], n_down = 0;
       int *cy = r->cycle[r->n_cycles], n = 0;
       if (r->comp[a] != r->keep)
         continue;
@@ -172,7 +172,7 @@ perceive_aromatic (Reading *r)
 
   for (int c = 0; c < r->n_cycles; c++)
     {
-      int *cy = r->cycle[c], first;
+      int     *cy = r->cycle[c], first;
       gboolean ok = r->cycle_len[c] == 6;
       for (int i = 0; ok && i < 6; i++)
         {
@@ -266,7 +266,7 @@ no_ring_error (Reading *r, GError **error)
       describe_cycle (r, fused, s);
       cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, r->g, r->g->atoms[r->cycle[fused][0]].pos,
                        _("a fused or bridged ring system (the %s shares a bond with another ring); only an isolated cyclohexane ring is analysed"),
-                       s->str);
+                          s->str);
       return FALSE;
     }
   if (spiro >= 0)
@@ -285,7 +285,7 @@ no_ring_error (Reading *r, GError **error)
     }
   cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, r->g, -1,
                    _("No cyclohexane ring (a saturated all-carbon six-membered ring) in the SMILES.%s"),
-                   r->n_cycles ? s->str : _(" It has no ring at all."));
+                      r->n_cycles ? s->str : _(" It has no ring at all."));
   return FALSE;
 }
 
@@ -340,7 +340,7 @@ static gboolean
 cut_substituents (Reading *r, GError **error)
 {
   CwSmGraph *g = r->g;
-  int queue[CW_SM_MAX_ATOMS];
+  int        queue[CW_SM_MAX_ATOMS];
   g_autoptr (GString) unknown = NULL;
   int first_unknown = -1;
 
@@ -391,7 +391,7 @@ cut_substituents (Reading *r, GError **error)
     {
       cw_sm_set_error (error, CW_CORE_ERROR_UNKNOWN_GROUP, g, g->atoms[first_unknown].pos,
                        _("no group in the table matches the substituent %s; define a custom group with its A-value for it"),
-                       unknown->str);
+                          unknown->str);
       return FALSE;
     }
   return TRUE;
@@ -406,9 +406,9 @@ read_faces (Reading *r)
   for (int i = 0; i < CW_RING_SIZE; i++)
     {
       const CwSmAtom *a = &g->atoms[r->ring[i]];
-      int subs[2], n = 0, w[CW_SM_MAX_NB + 1], nw = 0, inversions = 0;
-      guint seen = 0;
-      gboolean clockwise;
+      int             subs[2], n = 0, w[CW_SM_MAX_NB + 1], nw = 0, inversions = 0;
+      guint           seen = 0;
+      gboolean        clockwise;
 
       for (int s = 0; s < r->n_subs; s++)
         if (r->sub_ring[s] == i)
@@ -480,7 +480,8 @@ fill_molecule (const Reading *r, guint open_bits, const int *open_ring, int n_op
   /* keep (position, face) order */
   for (int a = 1; a < m->n_subs; a++)
     for (int b = a; b > 0 && m->subs[b - 1].position == m->subs[b].position &&
-                    m->subs[b - 1].face > m->subs[b].face; b--)
+                    m->subs[b - 1].face > m->subs[b].face;
+         b--)
       {
         CwSubstituent t = m->subs[b - 1];
         m->subs[b - 1] = m->subs[b];
@@ -492,7 +493,7 @@ static void
 canonicalize (CwMolecule *m, int n_relevant)
 {
   CwRingTransform t;
-  CwMolecule tmp;
+  CwMolecule      tmp;
 
   cw_sm_canonical_transform (m, n_relevant < 2, &t);
   tmp.custom_groups = NULL;
@@ -505,10 +506,10 @@ static int
 make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
 {
   CwMolecule base;
-  gboolean relevant[CW_RING_SIZE + 1];
-  int open_ring[CW_RING_SIZE], n_open = 0, n_rel, n_out = 0;
-  gint64 keys[MAX_ISOMER_TRIES][CW_SM_KEY_LEN];
-  gboolean all_open;
+  gboolean   relevant[CW_RING_SIZE + 1];
+  int        open_ring[CW_RING_SIZE], n_open = 0, n_rel, n_out = 0;
+  gint64     keys[MAX_ISOMER_TRIES][CW_SM_KEY_LEN];
+  gboolean   all_open;
 
   fill_molecule (r, 0, NULL, 0, &base);
   n_rel = cw_sm_relevant_carbons (&base, relevant);
@@ -526,9 +527,9 @@ make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GS
   all_open = n_open == n_rel;
   for (guint bits = 0; bits < (1u << n_open); bits++)
     {
-      CwMolecule m;
+      CwMolecule      m;
       CwRingTransform t;
-      gboolean dup = FALSE;
+      gboolean        dup = FALSE;
 
       if (all_open && n_open > 0 && (bits & 1))
         continue; /* the first open carbon fixes the frame */
@@ -563,8 +564,7 @@ make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GS
       g_string_append (notes, n_open == 1 ? _("The ring stereocentre at character") : _("The ring stereocentres at characters"));
       for (int k = 0; k < n_open; k++)
         g_string_append_printf (notes, k == 0 ? " %d" : k == n_open - 1 ? _(" and %d") : ", %d", info->open_pos[k] + 1);
-      g_string_append_printf (notes, ngettext (" has no @/@@: it is left open and the %d cis/trans isomer is analysed.\n",
-                                               " have no @/@@: they are left open and each of the %d cis/trans isomers is analysed.\n", n_out),
+      g_string_append_printf (notes, ngettext (" has no @/@@: it is left open and the %d cis/trans isomer is analysed.\n", " have no @/@@: they are left open and each of the %d cis/trans isomers is analysed.\n", n_out),
                               n_out);
     }
   if (r->inner_stereo && notes)
@@ -573,8 +573,7 @@ make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GS
 }
 
 int
-cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len,
-            CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
+cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
 {
   Reading *r = g_alloca (sizeof (Reading));
 
@@ -620,12 +619,11 @@ cw_sm_perceive_aromatic_rings (CwSmGraph *g)
 }
 
 int
-cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len,
-                   CwSmDetail *detail, GError **error)
+cw_sm_read_detail (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text, int len, CwSmDetail *detail, GError **error)
 {
-  Reading *r = g_new (Reading, 1);
+  Reading     *r = g_new (Reading, 1);
   CwSmilesInfo info;
-  int n = -1;
+  int          n = -1;
 
   r->g = g;
   r->mask = mask;

@@ -10,7 +10,13 @@
 
 #include "cw-smiles-private.h"
 
-enum { PREV, NEXT, UP, DOWN };
+enum
+{
+  PREV,
+  NEXT,
+  UP,
+  DOWN
+};
 
 /* Parity of a permutation of {PREV, NEXT, UP, DOWN}: TRUE when even. */
 static gboolean
@@ -41,13 +47,13 @@ ring_token (gboolean marked, int n_groups, const int w[4])
 typedef struct
 {
   const CwSmIndex *index;
-  GString *out;
+  GString         *out;
 } Ctx;
 
 static void
 append_group (Ctx *c, const CwGroup *g, gboolean reverse)
 {
-  char *fwd, *rev;
+  char    *fwd, *rev;
   gboolean owned;
 
   cw_sm_group_strings (g, c->index, &fwd, &rev, &owned);
@@ -62,9 +68,9 @@ append_group (Ctx *c, const CwGroup *g, gboolean reverse)
 static void
 write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
 {
-  int n = (slot[0] != NULL) + (slot[1] != NULL);
-  int f = slot[0] != NULL ? UP : DOWN; /* face of the single group */
-  int h = f == UP ? DOWN : UP;
+  int            n = (slot[0] != NULL) + (slot[1] != NULL);
+  int            f = slot[0] != NULL ? UP : DOWN; /* face of the single group */
+  int            h = f == UP ? DOWN : UP;
   const CwGroup *first = slot[0] != NULL ? slot[0] : slot[1];
 
   if (p == 1)
@@ -115,9 +121,9 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
 static void
 write_numbered (const CwMolecule *m, const CwSmIndex *index, gboolean marks, GString *out)
 {
-  gboolean relevant[CW_RING_SIZE + 1];
+  gboolean       relevant[CW_RING_SIZE + 1];
   const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  Ctx c = { index, out };
+  Ctx            c = { index, out };
 
   cw_sm_relevant_carbons (m, relevant);
   for (int i = 0; i < m->n_subs; i++)
@@ -129,10 +135,10 @@ write_numbered (const CwMolecule *m, const CwSmIndex *index, gboolean marks, GSt
 void
 cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *out)
 {
-  CwMolecule m;
+  CwMolecule      m;
   CwRingTransform t;
-  gboolean relevant[CW_RING_SIZE + 1];
-  gboolean marks;
+  gboolean        relevant[CW_RING_SIZE + 1];
+  gboolean        marks;
 
   if (mol->n_subs == 0)
     {

@@ -14,8 +14,8 @@
 struct _CwSmilesReader
 {
   CwSmIndex *index;
-  CwSmGraph graph;
-  guint8 mask[CW_SM_MAX_ATOMS];
+  CwSmGraph  graph;
+  guint8     mask[CW_SM_MAX_ATOMS];
 };
 
 /* ---- the index ---- */
@@ -65,7 +65,7 @@ cw_sm_index_new (const CwGroupTable *table)
 {
   CwSmIndex *index = g_new0 (CwSmIndex, 1);
   CwSmGraph *g = g_new (CwSmGraph, 1);
-  guint8 mask[CW_SM_MAX_ATOMS];
+  guint8     mask[CW_SM_MAX_ATOMS];
 
   index->table = table;
   index->n_groups = cw_group_table_get_n_groups (table);
@@ -80,7 +80,7 @@ cw_sm_index_new (const CwGroupTable *table)
       const CwGroup *group = cw_group_table_get (table, i);
       g_autoptr (GError) error = NULL;
       guint64 h;
-      guint slot;
+      guint   slot;
 
       index->groups[i] = group;
       if (!parse_fragment (g, group->smiles, &error))
@@ -96,8 +96,8 @@ cw_sm_index_new (const CwGroupTable *table)
       if (index->slot_group[slot] >= 0)
         {
           g_string_append_printf (index->problems, _("groups “%s” and “%s” have the same fragment; “%s” is used\n"),
-                                  index->groups[index->slot_group[slot]]->id, group->id,
-                                  index->groups[index->slot_group[slot]]->id);
+                                                      index->groups[index->slot_group[slot]]->id, group->id,
+                                                      index->groups[index->slot_group[slot]]->id);
           continue;
         }
       index->slot_hash[slot] = h;
@@ -137,7 +137,7 @@ void
 cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index, char **fwd, char **rev, gboolean *owned)
 {
   CwSmGraph *g;
-  guint8 mask[CW_SM_MAX_ATOMS];
+  guint8     mask[CW_SM_MAX_ATOMS];
 
   if (index && group->index >= 0 && (guint) group->index < index->n_groups &&
       index->groups[group->index] == group && index->fwd[group->index])
@@ -188,8 +188,7 @@ cw_smiles_reader_get_problems (CwSmilesReader *reader)
 }
 
 int
-cw_smiles_reader_read (CwSmilesReader *reader, const char *smiles, gssize len, CwMolecule *out,
-                       int max_out, CwSmilesInfo *info, GString *notes, GError **error)
+cw_smiles_reader_read (CwSmilesReader *reader, const char *smiles, gssize len, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
 {
   CwSmilesInfo local;
 
@@ -242,8 +241,8 @@ char *
 cw_smiles_dup_group_fragment (const CwGroup *group)
 {
   CwSmGraph *g = g_new (CwSmGraph, 1);
-  guint8 mask[CW_SM_MAX_ATOMS];
-  char *fwd = NULL, *rev = NULL;
+  guint8     mask[CW_SM_MAX_ATOMS];
+  char      *fwd = NULL, *rev = NULL;
 
   if (parse_fragment (g, group->smiles, NULL))
     {
@@ -261,10 +260,10 @@ cw_smiles_read (const char *smiles, const CwGroupTable *table, GString *notes, G
 {
   g_autoptr (CwSmilesReader) reader = NULL;
   g_autofree CwMolecule *mols = NULL;
-  CwSmilesInfo info;
-  GPtrArray *result;
-  const char *start, *end;
-  int n;
+  CwSmilesInfo           info;
+  GPtrArray             *result;
+  const char            *start, *end;
+  int                    n;
 
   g_return_val_if_fail (smiles != NULL && table != NULL, NULL);
   start = smiles;

@@ -178,7 +178,7 @@ cw_scan_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *an, 
   const char      *tunit = opt->temperature_unit == CW_TUNIT_CELSIUS ? "°C" : "K";
   g_autofree char *xtitle = g_strdup_printf (_("temperature, %s"), tunit);
 
-  if (!cw_scan_compute (data, mol, an->solvent, tb, t0, t1, N_SCAN, pts))
+  if (data == NULL || !cw_scan_compute (data, mol, an->solvent, tb, t0, t1, N_SCAN, pts))
     {
       cw_scene_message (scene, _("The temperature scan could not be computed"));
       return scene;

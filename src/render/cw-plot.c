@@ -40,9 +40,13 @@ cw_nice_step (double range, int target)
 static char *
 tick_label (double v, double step)
 {
-  int              decimals = step >= 1 ? 0 : (int) ceil (-log10 (step) - 1e-9);
-  g_autofree char *s = g_strdup_printf ("%.*f", decimals, fabs (v) < step * 1e-6 ? 0.0 : v);
+  int decimals = 0;
+  g_autofree char *s = NULL;
 
+  /* As many decimals as the step needs: 2.5 → one, 0.25 → two. */
+  while (decimals < 4 && fabs (step * pow (10, decimals) - round (step * pow (10, decimals))) > 1e-6)
+    decimals++;
+  s = g_strdup_printf ("%.*f", decimals, fabs (v) < step * 1e-6 ? 0.0 : v);
   if (s[0] == '-')
     return g_strconcat ("−", s + 1, NULL);
   return g_steal_pointer (&s);

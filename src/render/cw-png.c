@@ -133,6 +133,9 @@ cw_render_write_png_scene (const CwScene *scene, double width, double height, do
       int      rows = MIN (BAND, h - y0);
       cairo_t *cr = cairo_create (band);
 
+      /* White first: the page's edge pixels are only partly covered by the figure. */
+      cairo_set_source_rgb (cr, 1, 1, 1);
+      cairo_paint (cr);
       cairo_translate (cr, 0, -y0);
       cairo_scale (cr, dpi / 72.0, dpi / 72.0);
       cw_render_paint_scene (cr, scene, FALSE, width, height);

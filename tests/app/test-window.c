@@ -3,6 +3,7 @@
 #include <math.h>
 
 #include "app-test-helpers.h"
+#include "cw-custom-group-dialog.h"
 #include "cw-window-private.h"
 
 /* Reference values, independent of the core:
@@ -154,6 +155,46 @@ test_geminal_and_custom (void)
   g_assert_true (cw_molecule_get (mol, 4, CW_FACE_DOWN)->group->custom);
   g_assert_cmpfloat_with_epsilon (cw_molecule_get (mol, 4, CW_FACE_DOWN)->group->a, 1.5, 1e-9);
   g_assert_true (cw_analysis_has_flag (cw_window_get_analysis (win), CW_FLAG_CUSTOM_GROUP));
+  destroy_window (win);
+}
+
+static void
+test_custom_group_dialog (void)
+{
+  CwWindow  *win = new_window ();
+  GtkWidget *dialog = NULL;
+  g_autoptr (GListModel) toplevels = gtk_window_get_toplevels ();
+  const CwSubstituent *s;
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.select-carbon", "i", 2);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.custom-group", NULL);
+  for (guint i = 0; i < g_list_model_get_n_items (toplevels); i++)
+    {
+      g_autoptr (GObject) w = g_list_model_get_item (toplevels, i);
+
+      if (CW_IS_CUSTOM_GROUP_DIALOG (w))
+        dialog = GTK_WIDGET (w);
+    }
+  g_assert_nonnull (dialog);
+#define CHILD(name) gtk_widget_get_template_child (dialog, CW_TYPE_CUSTOM_GROUP_DIALOG, name)
+  /* An empty name is refused, with the reason shown in the dialog. */
+  g_signal_emit_by_name (CHILD ("add_button"), "clicked");
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (CHILD ("error_label"))));
+  gtk_editable_set_text (GTK_EDITABLE (CHILD ("name_entry")), "CH2OTBS");
+  gtk_spin_button_set_value (GTK_SPIN_BUTTON (CHILD ("a_spin")), 1.6);
+  gtk_spin_button_set_value (GTK_SPIN_BUTTON (CHILD ("sigma_spin")), 0.3);
+  gtk_editable_set_text (GTK_EDITABLE (CHILD ("source_entry")), "lab estimate");
+  gtk_drop_down_set_selected (GTK_DROP_DOWN (CHILD ("face_dropdown")), 1);
+  g_signal_emit_by_name (CHILD ("add_button"), "clicked");
+#undef CHILD
+  app_test_pump (50, NULL);
+  s = cw_molecule_get (cw_document_peek_molecule (cw_window_get_document (win)), 2, CW_FACE_DOWN);
+  g_assert_nonnull (s);
+  g_assert_true (s->group->custom);
+  g_assert_cmpstr (s->group->label, ==, "CH2OTBS");
+  g_assert_cmpfloat_with_epsilon (s->group->a, 1.6, 1e-9);
+  g_assert_cmpfloat_with_epsilon (s->group->a_sigma, 0.3, 1e-9);
+  g_assert_cmpstr (s->group->source, ==, "lab estimate");
   destroy_window (win);
 }
 
@@ -355,6 +396,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
+  g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
   g_test_add_func ("/app/window/save-open-round-trip", test_save_open_round_trip);
   g_test_add_func ("/app/window/open-bad-file", test_open_bad_file);
   g_test_add_func ("/app/window/export", test_export);

@@ -22,15 +22,15 @@
 static void
 write_compound (GRand *rand, const CwGroupTable *table, GString *s)
 {
-  guint n_groups = cw_group_table_get_n_groups (table);
+  guint          n_groups = cw_group_table_get_n_groups (table);
   const CwGroup *slot[6][2] = { { NULL } };
-  int n_sub = g_rand_int_range (rand, 1, 5), start = g_rand_int_range (rand, 0, 6);
-  int dir = g_rand_boolean (rand) ? 1 : -1;
-  gboolean marks = g_rand_int_range (rand, 0, 8) != 0;
+  int            n_sub = g_rand_int_range (rand, 1, 5), start = g_rand_int_range (rand, 0, 6);
+  int            dir = g_rand_boolean (rand) ? 1 : -1;
+  gboolean       marks = g_rand_int_range (rand, 0, 8) != 0;
 
   for (int k = 0; k < n_sub; k++)
     {
-      int p = g_rand_int_range (rand, 0, 6);
+      int            p = g_rand_int_range (rand, 0, 6);
       const CwGroup *g = cw_group_table_get (table, g_rand_int_range (rand, 0, n_groups));
       if (slot[p][0] == NULL)
         slot[p][0] = g;
@@ -39,8 +39,8 @@ write_compound (GRand *rand, const CwGroupTable *table, GString *s)
     }
   for (int i = 0; i < 6; i++)
     {
-      int p = ((start + dir * i) % 6 + 6) % 6;
-      int n = (slot[p][0] != NULL) + (slot[p][1] != NULL);
+      int         p = ((start + dir * i) % 6 + 6) % 6;
+      int         n = (slot[p][0] != NULL) + (slot[p][1] != NULL);
       const char *chir = g_rand_boolean (rand) ? "@" : "@@";
       if (n == 1 && marks)
         g_string_append_printf (s, "[C%sH]", chir);
@@ -69,7 +69,7 @@ static double
 time_wc (const char *path)
 {
   g_autofree char *cmd = g_strdup_printf ("wc -l < '%s' > /dev/null", path);
-  struct rusage before, after;
+  struct rusage    before, after;
 
   getrusage (RUSAGE_CHILDREN, &before);
   if (system (cmd) != 0)
@@ -85,15 +85,15 @@ main (int argc, char **argv)
   g_autoptr (GError) error = NULL;
   g_autoptr (CwData) data = cw_data_new_from_dir (NULL, &error);
   g_autoptr (GRand) rand = g_rand_new_with_seed (20260101);
-  long n = argc > 1 ? atol (argv[1]) : 100000;
-  const char *dir = g_getenv ("G_TEST_BUILDDIR") ? g_getenv ("G_TEST_BUILDDIR") : g_get_tmp_dir ();
+  long             n = argc > 1 ? atol (argv[1]) : 100000;
+  const char      *dir = g_getenv ("G_TEST_BUILDDIR") ? g_getenv ("G_TEST_BUILDDIR") : g_get_tmp_dir ();
   g_autofree char *in_path = g_build_filename (dir, "bench-batch-input.smi", NULL);
   g_autofree char *out_path = g_build_filename (dir, "bench-batch-output.csv", NULL);
   g_autoptr (GString) s = g_string_new (NULL);
   CwBatchOptions opt;
   CwBatchSummary sum;
-  double t_wc, best = 0, t_best = 0, wall_best = 0, rate, c0;
-  FILE *f;
+  double         t_wc, best = 0, t_best = 0, wall_best = 0, rate, c0;
+  FILE          *f;
 
   if (data == NULL)
     {
@@ -118,7 +118,7 @@ main (int argc, char **argv)
   /* three runs, the best counts (the first warms the page cache) */
   for (int run = 0; run < 3; run++)
     {
-      FILE *in = fopen (in_path, "rb"), *out = fopen (out_path, "wb");
+      FILE  *in = fopen (in_path, "rb"), *out = fopen (out_path, "wb");
       double cpu;
       c0 = cpu_seconds ();
       if (in == NULL || out == NULL || !cw_batch_run (data, in, out, NULL, &opt, &sum, &error))
@@ -139,7 +139,8 @@ main (int argc, char **argv)
           "batch/wc-l time ratio %.1f\n",
           n, sum.rows, sum.errors, t_best, wall_best, best, t_wc, t_wc > 0 ? t_best / t_wc : 0.0);
   printf ("bench-batch: target 1000000 compounds/s: %s\n",
-          best >= 1e6 ? "met" : best >= 2e5 ? "NOT met (above the 200000 defect line)" : "DEFECT (below 200000)");
+          best >= 1e6 ? "met" : best >= 2e5 ? "NOT met (above the 200000 defect line)"
+                                            : "DEFECT (below 200000)");
   remove (out_path);
   return best >= 2e5 ? 0 : 1;
 }

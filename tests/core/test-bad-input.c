@@ -8,12 +8,17 @@
 #include <fcntl.h>
 #include <glib/gstdio.h>
 #include <signal.h>
+#include <stdlib.h>
 #include <string.h>
+#ifdef __linux__
+#include <sys/prctl.h>
+#endif
 #include <sys/resource.h>
 #include <sys/stat.h>
 #include <sys/types.h>
 #include <unistd.h>
 
+#include "cw-smiles.h"
 #include "test-helpers.h"
 
 static CwData *data;
@@ -445,7 +450,13 @@ test_read_only_folder (void)
       g_autoptr (GError) error = NULL;
 
       if (getuid () == 0)
-        g_assert_true (setgid (65534) == 0 && setuid (65534) == 0);
+        {
+          g_assert_true (setgid (65534) == 0 && setuid (65534) == 0);
+#ifdef __linux__
+          /* changing uid makes the process undumpable, which stops LeakSanitizer at exit */
+          prctl (PR_SET_DUMPABLE, 1, 0, 0, 0);
+#endif
+        }
       g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
       g_assert_false (cw_document_save (doc, path, TRUE, &error));
       g_test_message ("with backup: %s", error->message);
@@ -552,6 +563,50 @@ test_spec_and_temperature (void)
     }
 }
 
+/* SMILES inputs that broke the reader under the fuzzer. Each runs in a child process (one was an
+ * out-of-bounds write); a child that crashes or gives no clean answer marks the test incomplete
+ * (reported) rather than taking the suite down. Expected: a clean reading or a clean refusal. */
+static const char *smiles_regressions[] = {
+  "C1CCCC.CC1",  /* a ring bond across '.', legal SMILES: ring-walk read/wrote atoms[-1] */
+  "CCC1CC(C)C.C1",
+  "\xc6\x98" "C@@H]1C[@H]1O", /* a multi-byte character: the message cut it in half */
+};
+
+static void
+test_smiles_regressions (void)
+{
+  int n_bad = 0;
+
+  if (g_test_subprocess ())
+    {
+      int i = atoi (g_getenv ("CW_TEST_SMILES_CASE"));
+      g_autoptr (GError) error = NULL;
+      g_autoptr (GPtrArray) mols = cw_smiles_read (smiles_regressions[i], data->groups, NULL, &error);
+
+      if (mols == NULL)
+        {
+          g_assert_nonnull (error);
+          g_assert_true (g_utf8_validate (error->message, -1, NULL));
+        }
+      return;
+    }
+  for (gsize i = 0; i < G_N_ELEMENTS (smiles_regressions); i++)
+    {
+      g_autofree char *num = g_strdup_printf ("%" G_GSIZE_FORMAT, i);
+
+      g_setenv ("CW_TEST_SMILES_CASE", num, TRUE);
+      g_test_trap_subprocess (NULL, 20 * G_USEC_PER_SEC, G_TEST_SUBPROCESS_DEFAULT);
+      if (!g_test_trap_has_passed ())
+        {
+          g_test_message ("SMILES case %" G_GSIZE_FORMAT " still fails", i);
+          n_bad++;
+        }
+    }
+  g_unsetenv ("CW_TEST_SMILES_CASE");
+  if (n_bad > 0)
+    g_test_incomplete ("SMILES reader: fuzzer findings not fixed yet; reported");
+}
+
 int
 main (int argc, char **argv)
 {
@@ -569,6 +624,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/bad-input/read-only-folder", test_read_only_folder);
   g_test_add_func ("/core/bad-input/three-on-one-carbon", test_three_on_one_carbon);
   g_test_add_func ("/core/bad-input/spec-and-temperature", test_spec_and_temperature);
+  g_test_add_func ("/core/bad-input/smiles-regressions", test_smiles_regressions);
   ret = g_test_run ();
   cw_data_free (data);
   return ret;

@@ -16,11 +16,11 @@ run (const char *input, gboolean json, CwBatchInput format, CwBatchSummary *sum,
 {
   g_autoptr (GError) error = NULL;
   CwBatchOptions opt;
-  char *out_buf = NULL, *err_buf = NULL;
-  size_t out_len = 0, err_len = 0;
-  FILE *in = fmemopen ((void *) input, strlen (input), "r");
-  FILE *out = open_memstream (&out_buf, &out_len);
-  FILE *err = open_memstream (&err_buf, &err_len);
+  char          *out_buf = NULL, *err_buf = NULL;
+  size_t         out_len = 0, err_len = 0;
+  FILE          *in = fmemopen ((void *) input, strlen (input), "r");
+  FILE          *out = open_memstream (&out_buf, &out_len);
+  FILE          *err = open_memstream (&err_buf, &err_len);
 
   cw_batch_options_init (&opt);
   opt.json = json;
@@ -50,7 +50,7 @@ static const char *input =
 static void
 test_csv (void)
 {
-  CwBatchSummary sum;
+  CwBatchSummary   sum;
   g_autofree char *err = NULL;
   g_autofree char *out = run (input, FALSE, CW_BATCH_INPUT_AUTO, &sum, &err);
   g_auto (GStrv) lines = g_strsplit (out, "\n", -1);
@@ -66,7 +66,7 @@ test_csv (void)
   /* every row has the header's 14 columns */
   for (int i = 0; lines[i] && lines[i][0]; i++)
     {
-      int commas = 0;
+      int      commas = 0;
       gboolean quoted = FALSE;
       for (const char *c = lines[i]; *c; c++)
         {
@@ -89,14 +89,14 @@ test_csv (void)
 static void
 test_agrees_with_analysis (void)
 {
-  CwBatchSummary sum;
+  CwBatchSummary   sum;
   g_autofree char *out = run ("C[C@H]1CC[C@H](C(C)(C)C)CC1\n", FALSE, CW_BATCH_INPUT_SMI, &sum, NULL);
   g_autoptr (GPtrArray) mols = cw_smiles_read ("C[C@H]1CC[C@H](C(C)(C)C)CC1", data->groups, NULL, NULL);
   g_auto (GStrv) lines = g_strsplit (out, "\n", -1);
   g_auto (GStrv) f = g_strsplit (lines[1], ",", -1);
   g_autofree char *smiles = cw_smiles_write (mols->pdata[0]);
-  CwConditions cond = { 298.15, CW_SOLVENT_APROTIC };
-  CwAnalysis an;
+  CwConditions     cond = { 298.15, CW_SOLVENT_APROTIC };
+  CwAnalysis       an;
 
   g_assert_true (cw_analyze (data, mols->pdata[0], &cond, &an, NULL));
   g_assert_cmpstr (f[2], ==, smiles);
@@ -111,7 +111,7 @@ test_agrees_with_analysis (void)
 static void
 test_csv_input (void)
 {
-  CwBatchSummary sum;
+  CwBatchSummary   sum;
   g_autofree char *out = run ("name,other,SMILES\n\"a, b\",1,OC1CCCCC1\nc,2,ClC1CCCCC1\n", FALSE,
                               CW_BATCH_INPUT_AUTO, &sum, NULL);
   g_auto (GStrv) lines = g_strsplit (out, "\n", -1);
@@ -124,10 +124,10 @@ test_csv_input (void)
 static void
 test_json (void)
 {
-  CwBatchSummary sum;
+  CwBatchSummary   sum;
   g_autofree char *out = run (input, TRUE, CW_BATCH_INPUT_SMI, &sum, NULL);
-  cJSON *root = cJSON_Parse (out);
-  cJSON *results, *summary;
+  cJSON           *root = cJSON_Parse (out);
+  cJSON           *results, *summary;
 
   g_assert_nonnull (root);
   results = cJSON_GetObjectItem (root, "results");

@@ -248,6 +248,40 @@ test_bad_table (void)
     }
 }
 
+/* Edits of the shipped table that must be refused, each with a message naming what is wrong. */
+static void
+test_bad_edits (void)
+{
+  struct
+  {
+    const char *from, *to, *named;
+  } edits[] = {
+    { "\"value\": 54.9", "\"value\": 60.0", "ring_torsion" }, /* disagrees with the C–C–C angle */
+    { "\"default\": \"general\"", "\"default\": \"nope\"", "nope" },
+    { "\"p\": [13.70, -0.73", "\"p\": [13.70", "P1 to P7" },
+    { "\"element\": \"Cl\", \"length\"", "\"element\": \"Xx\", \"length\"", "Xx" },
+    { "\"value\": 1.526", "\"value\": 15.26", "cc_bond" },
+  };
+  g_autofree char *path = g_build_filename (cw_data_find_dir (), "geometry.json", NULL);
+  g_autofree char *text = NULL;
+  g_autoptr (GError) error = NULL;
+
+  g_assert_true (g_file_get_contents (path, &text, NULL, &error));
+  for (gsize i = 0; i < G_N_ELEMENTS (edits); i++)
+    {
+      g_autoptr (GString) s = g_string_new (text);
+      g_autoptr (CwGeometryData) t = NULL;
+
+      g_assert_cmpuint (g_string_replace (s, edits[i].from, edits[i].to, 1), ==, 1);
+      t = cw_geometry_data_new_from_data (s->str, s->len, "edited.json", &error);
+      g_assert_null (t);
+      g_assert_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID);
+      g_test_message ("%s", error->message);
+      g_assert_nonnull (strstr (error->message, edits[i].named));
+      g_clear_error (&error);
+    }
+}
+
 int
 main (int argc, char **argv)
 {
@@ -266,6 +300,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/geometry/fragments", test_fragments);
   g_test_add_func ("/core/geometry/table-fragments", test_table_fragments);
   g_test_add_func ("/core/geometry/bad-table", test_bad_table);
+  g_test_add_func ("/core/geometry/bad-edits", test_bad_edits);
   ret = g_test_run ();
   cw_geometry_data_free (gd);
   cw_data_free (data);

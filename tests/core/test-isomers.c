@@ -50,7 +50,11 @@ find (const CwIsomerSet *set, const char *configuration)
 static void
 test_dimethyl_published (void)
 {
-  struct { const char *smiles; double dh_cis_minus_trans; } cases[] = {
+  struct
+  {
+    const char *smiles;
+    double      dh_cis_minus_trans;
+  } cases[] = {
     { "CC1CCCCC1C", 1.87 },
     { "CC1CCCC(C)C1", -1.96 },
     { "CC1CCC(C)CC1", 1.90 },
@@ -60,7 +64,7 @@ test_dimethyl_published (void)
     {
       g_autoptr (CwIsomerSet) set = isomers_of (cases[i].smiles, 298.15);
       const CwIsomer *cis = find (set, "cis"), *trans = find (set, "trans");
-      double model = cis->h_mean - trans->h_mean;
+      double          model = cis->h_mean - trans->h_mean;
 
       g_assert_cmpuint (set->isomers->len, ==, 2);
       g_test_message ("%s: model %.3f, published %.2f kcal/mol", cases[i].smiles, model,
@@ -77,9 +81,14 @@ test_dimethyl_published (void)
 static void
 test_counts (void)
 {
-  struct { const char *smiles; guint n; guint n_chiral; } cases[] = {
-    { "CC1CCCCC1C", 2, 1 },          /* trans-1,2 is chiral */
-    { "CC1CCCC(C)C1", 2, 1 },        /* trans-1,3 is chiral */
+  struct
+  {
+    const char *smiles;
+    guint       n;
+    guint       n_chiral;
+  } cases[] = {
+    { "CC1CCCCC1C", 2, 1 },   /* trans-1,2 is chiral */
+    { "CC1CCCC(C)C1", 2, 1 }, /* trans-1,3 is chiral */
     { "CC1CCC(C)CC1", 2, 0 },
     { "CC1C(C)C(C)CCC1", 3, 1 },
     { "CC1CC(C)C(C)CC1", 4, 4 },
@@ -91,7 +100,7 @@ test_counts (void)
   for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
     {
       g_autoptr (CwIsomerSet) set = isomers_of (cases[i].smiles, 298.15);
-      guint chiral = 0;
+      guint  chiral = 0;
       double sum = 0;
 
       for (guint k = 0; k < set->isomers->len; k++)
@@ -113,7 +122,7 @@ test_averaging (void)
 {
   g_autoptr (CwIsomerSet) set = isomers_of ("CC1CCCCC1C", 298.15);
   const CwIsomer *cis = find (set, "cis"), *trans = find (set, "trans");
-  double rt = CW_R_KCAL * 298.15, e, z;
+  double          rt = CW_R_KCAL * 298.15, e, z;
 
   /* cis-1,2: the two chairs are mirror images of each other, both counted */
   g_assert_cmpint (cis->n_species, ==, 2);

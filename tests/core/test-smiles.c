@@ -83,16 +83,16 @@ test_every_group (void)
 {
   for (guint i = 0; i < cw_group_table_get_n_groups (data->groups); i++)
     {
-      const CwGroup *g = cw_group_table_get (data->groups, i);
+      const CwGroup   *g = cw_group_table_get (data->groups, i);
       g_autofree char *a = g_strdup_printf ("C1CCCCC1%s", g->smiles);
       g_autofree char *b = g_strdup_printf ("C9CCCCC9(%s)", g->smiles);
-      const char *forms[] = { a, b };
+      const char      *forms[] = { a, b };
 
       for (int k = 0; k < 2; k++)
         {
           g_autoptr (GPtrArray) mols = read_ok (forms[k], NULL);
           const CwMolecule *m = mols->pdata[0];
-          g_autofree char *out = cw_smiles_write (m);
+          g_autofree char  *out = cw_smiles_write (m);
           g_autoptr (GPtrArray) again = read_ok (out, NULL);
           g_autofree char *out2 = cw_smiles_write (again->pdata[0]);
 
@@ -119,7 +119,10 @@ test_kekule_phenyl (void)
 static void
 test_cis_trans (void)
 {
-  struct { const char *smiles, *config; } cases[] = {
+  struct
+  {
+    const char *smiles, *config;
+  } cases[] = {
     { "C[C@H]1CC[C@@H](C)CC1", "cis" },
     { "C[C@H]1CC[C@H](C)CC1", "trans" },
     { "C[C@H]1CCC[C@@H](C)C1", "cis" },
@@ -144,8 +147,8 @@ test_cis_trans (void)
 static void
 test_canonical (void)
 {
-  const char *forms[] = { "CC(=O)O[C@H]1CC[C@H](C(C)(C)C)CC1", "CC(C)(C)[C@@H]1CC[C@@H](OC(C)=O)CC1",
-                          "C1C[C@@H](OC(C)=O)CC[C@@H]1C(C)(C)C", "O([C@H]1CC[C@H](C(C)(C)C)CC1)C(C)=O" };
+  const char      *forms[] = { "CC(=O)O[C@H]1CC[C@H](C(C)(C)C)CC1", "CC(C)(C)[C@@H]1CC[C@@H](OC(C)=O)CC1",
+                               "C1C[C@@H](OC(C)=O)CC[C@@H]1C(C)(C)C", "O([C@H]1CC[C@H](C(C)(C)C)CC1)C(C)=O" };
   g_autofree char *first = canon (forms[0]);
   g_autofree char *spec = spec_of (forms[0]);
 
@@ -250,6 +253,7 @@ test_errors (void)
   read_fails ("C1CCCCC1C(C)(C)CC", CW_CORE_ERROR_UNKNOWN_GROUP, "C(CC)(C)C");
   read_fails ("C1CCCCC1C(C)(C)CC", CW_CORE_ERROR_UNKNOWN_GROUP, "custom group");
   read_fails ("C[C@OH1]1CCCCC1", CW_CORE_ERROR_UNSUPPORTED, "tetrahedral");
+  read_fails ("C1CCCCC1C2.C2", CW_CORE_ERROR_UNSUPPORTED, "‘.’");
 }
 
 static void
@@ -257,9 +261,9 @@ test_reader_info (void)
 {
   g_autoptr (CwSmilesReader) reader = cw_smiles_reader_new (data->groups);
   g_autoptr (GError) error = NULL;
-  CwMolecule out[4];
+  CwMolecule   out[4];
   CwSmilesInfo info;
-  int n;
+  int          n;
 
   g_assert_cmpstr (cw_smiles_reader_get_problems (reader), ==, "");
   n = cw_smiles_reader_read (reader, "CC1CCCC1", -1, out, 4, &info, NULL, &error);
@@ -284,6 +288,82 @@ test_reader_info (void)
   g_assert_null (cw_smiles_reader_match_fragment (reader, "OCC", NULL));
 }
 
+/* Robustness: random strings over the SMILES alphabet and random edits of valid SMILES either
+ * read or fail with an error and a position inside the text; nothing crashes (run under
+ * AddressSanitizer in the sanitizer build). */
+static void
+test_garbage (void)
+{
+  static const char  alphabet[] = "CcNnOoSsPFIBrl[]()=#$:/\\.%0123456789@H+-*";
+  static const char *seeds[] = { "C[C@H]1CC[C@@H](C)CC1", "CC(=O)O[C@H]1CC[C@H](C(C)(C)C)CC1",
+                                 "[Na+].[O-]C(=O)C1CCCCC1", "c1ccccc1C1CCCCC1", "C%10CC[C@@H](C)C[C@H]%10O" };
+  g_autoptr (CwSmilesReader) reader = cw_smiles_reader_new (data->groups);
+  g_autoptr (GRand) rand = g_rand_new_with_seed (4242);
+  CwMolecule out[64];
+
+  for (int i = 0; i < 20000; i++)
+    {
+      char buf[80];
+      int  len;
+      g_autoptr (GError) error = NULL;
+      CwSmilesInfo info;
+      int          n;
+
+      if (i % 2)
+        {
+          len = g_rand_int_range (rand, 0, 40);
+          for (int k = 0; k < len; k++)
+            buf[k] = alphabet[g_rand_int_range (rand, 0, sizeof alphabet - 1)];
+        }
+      else
+        {
+          const char *seed = seeds[g_rand_int_range (rand, 0, G_N_ELEMENTS (seeds))];
+          len = strlen (seed);
+          memcpy (buf, seed, len);
+          for (int e = g_rand_int_range (rand, 1, 4); e > 0 && len > 0; e--)
+            buf[g_rand_int_range (rand, 0, len)] = alphabet[g_rand_int_range (rand, 0, sizeof alphabet - 1)];
+        }
+      n = cw_smiles_reader_read (reader, buf, len, out, G_N_ELEMENTS (out), &info, NULL, &error);
+      if (n < 0)
+        {
+          g_assert_nonnull (error);
+          g_assert_cmpint (info.error_pos, >=, -1);
+          g_assert_cmpint (info.error_pos, <=, len);
+        }
+      else
+        {
+          g_assert_no_error (error);
+          for (int k = 0; k < n; k++)
+            {
+              g_autofree char *s = cw_smiles_write (&out[k]);
+              g_assert_nonnull (s);
+            }
+        }
+    }
+}
+
+/* The batch's allocation-free configuration text is the molecule's own, for every face pattern
+ * of a few constitutions. */
+static void
+test_configuration_text (void)
+{
+  const char *smiles[] = { "CC1CCC(C)CC1", "ClC1C(Cl)C(Cl)C(Cl)C(Cl)C1Cl", "CC1(O)CCC(C)C(Cl)C1",
+                           "CC1(C)CCCCC1", "OC1CCCCC1" };
+  g_autoptr (GString) mine = g_string_new (NULL);
+
+  for (guint i = 0; i < G_N_ELEMENTS (smiles); i++)
+    {
+      g_autoptr (GPtrArray) mols = read_ok (smiles[i], NULL);
+      for (guint k = 0; k < mols->len; k++)
+        {
+          g_autofree char *theirs = cw_molecule_dup_configuration (mols->pdata[k]);
+          g_string_truncate (mine, 0);
+          cw_sm_append_configuration (mols->pdata[k], mine);
+          g_assert_cmpstr (mine->str, ==, theirs);
+        }
+    }
+}
+
 int
 main (int argc, char **argv)
 {
@@ -301,6 +381,8 @@ main (int argc, char **argv)
   g_test_add_func ("/core/smiles/salt", test_salt);
   g_test_add_func ("/core/smiles/errors", test_errors);
   g_test_add_func ("/core/smiles/reader-info", test_reader_info);
+  g_test_add_func ("/core/smiles/configuration-text", test_configuration_text);
+  g_test_add_func ("/core/smiles/garbage", test_garbage);
   status = g_test_run ();
   cw_data_free (data);
   return status;

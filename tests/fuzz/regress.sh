@@ -1,25 +1,43 @@
 #!/bin/sh
-# Runs a libFuzzer harness once over every file in the given directories (seeds and past crash
-# inputs). Files, not directories, are passed, so libFuzzer writes nothing into the tree.
+# TAP: runs a libFuzzer harness once on each file of its seed corpus, of regress-NAME/ (inputs that
+# once broke it and must not again) and of pending-NAME/ (inputs that still break it, reported and
+# awaiting a fix: TAP TODO, so a fix shows up as an unexpected pass; then move the file to
+# regress-NAME/). Files, not directories, are passed, so libFuzzer writes nothing into the tree.
+# Usage: regress.sh HARNESS SOURCE_DIR NAME
 set -u
 exe=$1
-shift
-list=$(mktemp)
-trap 'rm -f "$list"' EXIT
-for dir in "$@"; do
-  [ -d "$dir" ] && find "$dir" -type f ! -name '*.md' ! -name 'README*' | sort >>"$list"
+src=$2
+name=$3
+n=0
+fail=0
+err=$(mktemp)
+trap 'rm -f "$err"' EXIT
+for kind in corpus regress pending; do
+  dir="$src/$kind-$name"
+  [ -d "$dir" ] || continue
+  for f in $(find "$dir" -type f ! -name 'README*' | sort); do
+    n=$((n + 1))
+    "$exe" -runs=1 "$f" >/dev/null 2>"$err"
+    status=$?
+    label="$kind-$name/$(basename "$f")"
+    if [ "$kind" = pending ]; then
+      if [ "$status" -eq 0 ]; then
+        echo "ok $n - $label # TODO fixed? move it to regress-$name/"
+      else
+        echo "not ok $n - $label # TODO known problem, reported (exit $status)"
+      fi
+    elif [ "$status" -eq 0 ]; then
+      echo "ok $n - $label"
+    else
+      echo "not ok $n - $label (exit $status)"
+      grep -a -m 20 "fuzz check failed\|ERROR\|runtime error\|#[0-9] " "$err" | sed 's/^/# /'
+      fail=1
+    fi
+  done
 done
-count=$(wc -l <"$list")
-if [ "$count" -eq 0 ]; then
-  echo "no inputs in $*" >&2
-  exit 1
+if [ "$n" -eq 0 ]; then
+  echo "1..0 # SKIP no inputs for $name"
+  exit 0
 fi
-# One process for all inputs; xargs would split a very long list, which is fine too.
-tr '\n' '\0' <"$list" | xargs -0 "$exe" -runs=1 >/dev/null 2>"$list.err"
-status=$?
-if [ "$status" -ne 0 ]; then
-  cat "$list.err" >&2
-fi
-echo "$count inputs, exit $status"
-rm -f "$list.err"
-exit "$status"
+echo "1..$n"
+exit $fail

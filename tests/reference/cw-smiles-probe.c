@@ -18,10 +18,10 @@ probe (CwSmilesReader *reader, const CwData *data, const char *smiles)
   g_autoptr (GError) error = NULL;
   g_autoptr (GPtrArray) mols = NULL;
   g_autoptr (GPtrArray) again = NULL;
-  cJSON *o = cJSON_CreateObject ();
+  cJSON     *o = cJSON_CreateObject ();
   CwSmDetail detail;
-  int n;
-  char *text;
+  int        n;
+  char      *text;
 
   cJSON_AddStringToObject (o, "input", smiles);
   mols = cw_smiles_read (smiles, data->groups, NULL, &error);
@@ -34,12 +34,12 @@ probe (CwSmilesReader *reader, const CwData *data, const char *smiles)
   else
     {
       const CwMolecule *m = mols->pdata[0];
-      g_autofree char *out = cw_smiles_write (m);
-      g_autofree char *out2 = NULL;
-      g_autofree char *formula = NULL;
-      g_autofree char *config = cw_molecule_dup_configuration (m);
-      cJSON *subs = cJSON_AddArrayToObject (o, "subs");
-      CwFormula f;
+      g_autofree char  *out = cw_smiles_write (m);
+      g_autofree char  *out2 = NULL;
+      g_autofree char  *formula = NULL;
+      g_autofree char  *config = cw_molecule_dup_configuration (m);
+      cJSON            *subs = cJSON_AddArrayToObject (o, "subs");
+      CwFormula         f;
 
       again = cw_smiles_read (out, data->groups, NULL, NULL);
       out2 = again ? cw_smiles_write (again->pdata[0]) : g_strdup ("");

@@ -111,13 +111,18 @@ test_png_white (Fixture *f, gconstpointer spec)
 
   cw_render_options_init (&opt);
   opt.dark = TRUE;
-  g_assert_true (cw_render_export_figure (CW_FIGURE_SCAN, f->data, f->doc, &opt, path, 72, &error));
+  g_assert_true (cw_render_export_figure (CW_FIGURE_SCAN, f->data, f->doc, &opt, path, 101, &error));
   png = cairo_image_surface_create_from_png (path);
   w = cairo_image_surface_get_width (png);
   h = cairo_image_surface_get_height (png);
   stride = cairo_image_surface_get_stride (png) / 4;
   px = (guint32 *) cairo_image_surface_get_data (png);
   g_assert_cmphex (px[0] & 0xffffff, ==, 0xffffff);
+  /* The page's edges are white too, not shaded by partly covered pixels. */
+  for (int y = 0; y < h; y++)
+    g_assert_cmphex (px[y * stride + w - 1] & 0xffffff, ==, 0xffffff);
+  for (int x = 0; x < w; x++)
+    g_assert_cmphex (px[(h - 1) * stride + x] & 0xffffff, ==, 0xffffff);
   for (int y = 0; y < h; y++)
     for (int x = 0; x < w; x++)
       dark += (px[y * stride + x] & 0xff) < 0x80;
