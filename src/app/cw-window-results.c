@@ -269,6 +269,6 @@ void
 cw_window_update_results (CwWindow *self)
 {
   update_summary (self);
-  update_terms (self);
-  update_flags (self);
+  if (!g_getenv ("CW_NOTERMS")) update_terms (self);
+  if (!g_getenv ("CW_NOFLAGS")) update_flags (self);
 }

@@ -200,6 +200,9 @@ cw_window_refresh (CwWindow *self)
   if (!self->an_valid)
     self->analysis_error = g_strdup (error->message);
 
+  if (g_getenv ("CW_FLOOR")) { gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
+  if (g_getenv ("CW_FLOOR2")) { cw_ring_canvas_set_molecule (self->ring_canvas, mol); gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
+  if (g_getenv ("CW_FLOOR3")) { cw_ring_canvas_set_molecule (self->ring_canvas, mol); update_editor (self); cw_window_update_results (self); gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
   if (n_custom != self->n_custom_shown)
     update_groups_store (self);
   cw_ring_canvas_set_molecule (self->ring_canvas, mol);

@@ -201,13 +201,6 @@ put_json_string (Batch *b, const char *s, gsize n)
 
 /* ---- one result ---- */
 
-static void
-append_num (GString *s, double x, int decimals)
-{
-  char buf[40];
-  g_string_append_len (s, buf, fmt_fixed (buf, x, decimals));
-}
-
 /* The part of a row that depends only on the molecule: SMILES … flags. */
 static void
 append_configuration (const CwMolecule *m, GString *s)
@@ -217,9 +210,17 @@ append_configuration (const CwMolecule *m, GString *s)
   cw_sm_append_configuration (m, s);
   if (s->len == before && m->n_subs > 1)
     {
-      /* only geminal pairs carry the relative configuration: name every slot instead */
-      g_autofree char *spec = cw_molecule_dup_spec (m);
-      g_string_append (s, spec);
+      /* only geminal pairs carry the relative configuration: name every slot instead, as
+       * cw_molecule_dup_spec does ("1u=methyl 1d=hydroxy 4d=tert-butyl") */
+      for (int i = 0; i < m->n_subs; i++)
+        {
+          if (i)
+            g_string_append_c (s, ' ');
+          g_string_append_c (s, '0' + m->subs[i].position);
+          g_string_append_c (s, m->subs[i].face == CW_FACE_UP ? 'u' : 'd');
+          g_string_append_c (s, '=');
+          g_string_append (s, m->subs[i].group->id);
+        }
     }
 }
 
@@ -227,31 +228,34 @@ append_configuration (const CwMolecule *m, GString *s)
 static void
 format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
 {
-  char    buf[40];
-  guint32 seen = 0;
-  int     n_flags = 0;
+  char        num[256], *q = num;
+  guint32     seen = 0;
+  int         n_flags = 0;
+  gboolean    json = b->opt->json;
+  const char *sep = ",";
 
-  if (b->opt->json)
+  /* the numbers go into one local buffer and then into s in one piece */
+  q += fmt_fixed (q, an->delta_g, 3);
+  q = g_stpcpy (q, json ? ",\"sigma\":" : sep);
+  q += fmt_fixed (q, an->sigma, 3);
+  q = g_stpcpy (q, json ? ",\"K\":" : sep);
+  q += fmt_sig (q, an->K);
+  q = g_stpcpy (q, json ? ",\"populations\":[" : sep);
+  q += fmt_fixed (q, an->pop[0], 4);
+  *q++ = ',';
+  q += fmt_fixed (q, an->pop[1], 4);
+  q = g_stpcpy (q, json ? "],\"major_interval\":[" : sep);
+  q += fmt_fixed (q, an->pop_low[an->major], 4);
+  *q++ = ',';
+  q += fmt_fixed (q, an->pop_high[an->major], 4);
+  q = g_stpcpy (q, json ? "],\"flags\":[" : sep);
+  if (json)
     {
       g_string_append (s, "\"smiles\":\"");
       cw_sm_reader_write_canonical (b->reader, m, s);
       g_string_append (s, "\",\"configuration\":\"");
       append_configuration (m, s);
       g_string_append (s, an->major ? "\",\"major_chair\":2,\"delta_g\":" : "\",\"major_chair\":1,\"delta_g\":");
-      append_num (s, an->delta_g, 3);
-      g_string_append (s, ",\"sigma\":");
-      append_num (s, an->sigma, 3);
-      g_string_append (s, ",\"K\":");
-      g_string_append_len (s, buf, fmt_sig (buf, an->K));
-      g_string_append (s, ",\"populations\":[");
-      append_num (s, an->pop[0], 4);
-      g_string_append_c (s, ',');
-      append_num (s, an->pop[1], 4);
-      g_string_append (s, "],\"major_interval\":[");
-      append_num (s, an->pop_low[an->major], 4);
-      g_string_append_c (s, ',');
-      append_num (s, an->pop_high[an->major], 4);
-      g_string_append (s, "],\"flags\":[");
     }
   else
     {
@@ -259,21 +263,8 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
       g_string_append_c (s, ',');
       append_configuration (m, s);
       g_string_append (s, an->major ? ",2," : ",1,");
-      append_num (s, an->delta_g, 3);
-      g_string_append_c (s, ',');
-      append_num (s, an->sigma, 3);
-      g_string_append_c (s, ',');
-      g_string_append_len (s, buf, fmt_sig (buf, an->K));
-      g_string_append_c (s, ',');
-      append_num (s, an->pop[0], 4);
-      g_string_append_c (s, ',');
-      append_num (s, an->pop[1], 4);
-      g_string_append_c (s, ',');
-      append_num (s, an->pop_low[an->major], 4);
-      g_string_append_c (s, ',');
-      append_num (s, an->pop_high[an->major], 4);
-      g_string_append_c (s, ',');
     }
+  g_string_append_len (s, num, q - num);
   for (int k = 0; k < an->n_flags; k++)
     {
       CwFlagCode code = an->flags[k].code;

@@ -268,6 +268,31 @@ cw_isomer_set_free (CwIsomerSet *set)
   g_free (set);
 }
 
+static void
+relative_key (const CwMolecule *mol, gint64 key[CW_SM_KEY_LEN])
+{
+  CwRingTransform t;
+
+  cw_sm_canonical_transform (mol, TRUE, &t);
+  cw_sm_molecule_key (mol, &t, key);
+}
+
+int
+cw_isomer_set_find (const CwIsomerSet *set, const CwMolecule *mol)
+{
+  gint64 want[CW_SM_KEY_LEN], key[CW_SM_KEY_LEN];
+
+  g_return_val_if_fail (set != NULL && mol != NULL, -1);
+  relative_key (mol, want);
+  for (guint i = 0; i < set->isomers->len; i++)
+    {
+      relative_key (((const CwIsomer *) set->isomers->pdata[i])->molecule, key);
+      if (memcmp (key, want, sizeof key) == 0)
+        return i;
+    }
+  return -1;
+}
+
 const char *
 cw_isomers_method_text (void)
 {

@@ -44,6 +44,9 @@ typedef struct
 /* Faces of constitution are ignored; every relative configuration is listed once. */
 CwIsomerSet *cw_isomers_enumerate (const CwData *data, const CwMolecule *constitution, const CwConditions *cond, GError **error);
 void         cw_isomer_set_free (CwIsomerSet *set);
+/* Index of the isomer with the relative configuration of mol (either enantiomer), or -1. Compare
+ * configurations with this, not with SMILES: a chiral isomer is listed by one enantiomer. */
+int cw_isomer_set_find (const CwIsomerSet *set, const CwMolecule *mol);
 /* The reference and the counting rules above, in plain words, for output. */
 const char *cw_isomers_method_text (void);
 

@@ -11,21 +11,15 @@
 
 #define EMPTY G_GINT64_CONSTANT (1) << 40
 
-gint64
-cw_sm_group_rank (const CwGroup *g)
-{
-  if (g == NULL)
-    return EMPTY;
-  if (g->index >= 0 && !g->custom)
-    return g->index;
-  return 100000 + (g->id ? g_str_hash (g->id) % 1000000 : 0);
-}
-
 /* source position of result position p under start s (1..6) and direction d (0: +1, 1: -1) */
+/* clang-format off */
 static const guint8 source_table[2][CW_RING_SIZE + 1][CW_RING_SIZE + 1] = {
-  { { 0 }, { 0, 1, 2, 3, 4, 5, 6 }, { 0, 2, 3, 4, 5, 6, 1 }, { 0, 3, 4, 5, 6, 1, 2 }, { 0, 4, 5, 6, 1, 2, 3 }, { 0, 5, 6, 1, 2, 3, 4 }, { 0, 6, 1, 2, 3, 4, 5 } },
-  { { 0 }, { 0, 1, 6, 5, 4, 3, 2 }, { 0, 2, 1, 6, 5, 4, 3 }, { 0, 3, 2, 1, 6, 5, 4 }, { 0, 4, 3, 2, 1, 6, 5 }, { 0, 5, 4, 3, 2, 1, 6 }, { 0, 6, 5, 4, 3, 2, 1 } },
+  { { 0 }, { 0, 1, 2, 3, 4, 5, 6 }, { 0, 2, 3, 4, 5, 6, 1 }, { 0, 3, 4, 5, 6, 1, 2 },
+    { 0, 4, 5, 6, 1, 2, 3 }, { 0, 5, 6, 1, 2, 3, 4 }, { 0, 6, 1, 2, 3, 4, 5 } },
+  { { 0 }, { 0, 1, 6, 5, 4, 3, 2 }, { 0, 2, 1, 6, 5, 4, 3 }, { 0, 3, 2, 1, 6, 5, 4 },
+    { 0, 4, 3, 2, 1, 6, 5 }, { 0, 5, 4, 3, 2, 1, 6 }, { 0, 6, 5, 4, 3, 2, 1 } },
 };
+/* clang-format on */
 
 static inline int
 source_position (const CwRingTransform *t, int p)

@@ -12,127 +12,18 @@
 #include "cw-core-error.h"
 #include "cw-smiles-private.h"
 
+/* clang-format off */
 static const char *const element_symbols[] = {
-  "*",
-  "H",
-  "He",
-  "Li",
-  "Be",
-  "B",
-  "C",
-  "N",
-  "O",
-  "F",
-  "Ne",
-  "Na",
-  "Mg",
-  "Al",
-  "Si",
-  "P",
-  "S",
-  "Cl",
-  "Ar",
-  "K",
-  "Ca",
-  "Sc",
-  "Ti",
-  "V",
-  "Cr",
-  "Mn",
-  "Fe",
-  "Co",
-  "Ni",
-  "Cu",
-  "Zn",
-  "Ga",
-  "Ge",
-  "As",
-  "Se",
-  "Br",
-  "Kr",
-  "Rb",
-  "Sr",
-  "Y",
-  "Zr",
-  "Nb",
-  "Mo",
-  "Tc",
-  "Ru",
-  "Rh",
-  "Pd",
-  "Ag",
-  "Cd",
-  "In",
-  "Sn",
-  "Sb",
-  "Te",
-  "I",
-  "Xe",
-  "Cs",
-  "Ba",
-  "La",
-  "Ce",
-  "Pr",
-  "Nd",
-  "Pm",
-  "Sm",
-  "Eu",
-  "Gd",
-  "Tb",
-  "Dy",
-  "Ho",
-  "Er",
-  "Tm",
-  "Yb",
-  "Lu",
-  "Hf",
-  "Ta",
-  "W",
-  "Re",
-  "Os",
-  "Ir",
-  "Pt",
-  "Au",
-  "Hg",
-  "Tl",
-  "Pb",
-  "Bi",
-  "Po",
-  "At",
-  "Rn",
-  "Fr",
-  "Ra",
-  "Ac",
-  "Th",
-  "Pa",
-  "U",
-  "Np",
-  "Pu",
-  "Am",
-  "Cm",
-  "Bk",
-  "Cf",
-  "Es",
-  "Fm",
-  "Md",
-  "No",
-  "Lr",
-  "Rf",
-  "Db",
-  "Sg",
-  "Bh",
-  "Hs",
-  "Mt",
-  "Ds",
-  "Rg",
-  "Cn",
-  "Nh",
-  "Fl",
-  "Mc",
-  "Lv",
-  "Ts",
-  "Og",
+  "*", "H", "He", "Li", "Be", "B", "C", "N", "O", "F", "Ne", "Na", "Mg", "Al", "Si", "P", "S",
+  "Cl", "Ar", "K", "Ca", "Sc", "Ti", "V", "Cr", "Mn", "Fe", "Co", "Ni", "Cu", "Zn", "Ga", "Ge",
+  "As", "Se", "Br", "Kr", "Rb", "Sr", "Y", "Zr", "Nb", "Mo", "Tc", "Ru", "Rh", "Pd", "Ag", "Cd",
+  "In", "Sn", "Sb", "Te", "I", "Xe", "Cs", "Ba", "La", "Ce", "Pr", "Nd", "Pm", "Sm", "Eu", "Gd",
+  "Tb", "Dy", "Ho", "Er", "Tm", "Yb", "Lu", "Hf", "Ta", "W", "Re", "Os", "Ir", "Pt", "Au", "Hg",
+  "Tl", "Pb", "Bi", "Po", "At", "Rn", "Fr", "Ra", "Ac", "Th", "Pa", "U", "Np", "Pu", "Am", "Cm",
+  "Bk", "Cf", "Es", "Fm", "Md", "No", "Lr", "Rf", "Db", "Sg", "Bh", "Hs", "Mt", "Ds", "Rg", "Cn",
+  "Nh", "Fl", "Mc", "Lv", "Ts", "Og",
 };
+/* clang-format on */
 
 #define N_ELEMENTS ((int) G_N_ELEMENTS (element_symbols))
 
@@ -199,7 +90,7 @@ cw_sm_set_error (GError         **error,
   g_set_error (error, CW_CORE_ERROR, code, _("SMILES, character %d: %s\n  %s%s\n  %*s^"), pos + 1, what, from > 0 ? "…" : "", excerpt, (int) (pos - from + (from > 0 ? 1 : 0)), "");
 }
 
-static int
+static inline int
 add_neighbour (Parser *p, int atom, int other, int bond, GError **error)
 {
   CwSmAtom *a = &p->g->atoms[atom];
@@ -238,36 +129,33 @@ default_bond (Parser *p, int a, int b)
   return p->g->atoms[a].aromatic && p->g->atoms[b].aromatic ? CW_SM_BOND_AROMATIC : CW_SM_BOND_SINGLE;
 }
 
-static int
-lookup_symbol_slow (const char *s, int n)
+/* Element by symbol: one table entry per upper-case letter and following lower-case letter (or
+ * none), filled once from element_symbols. */
+static gint8 symbol_table[26][27];
+
+static void
+fill_symbol_table (void)
 {
+  static gsize done = 0;
+
+  if (!g_once_init_enter (&done))
+    return;
+  memset (symbol_table, -1, sizeof symbol_table);
   for (int z = 1; z < N_ELEMENTS; z++)
-    if ((int) strlen (element_symbols[z]) == n && strncmp (element_symbols[z], s, n) == 0)
-      return z;
-  return -1;
+    {
+      const char *sym = element_symbols[z];
+      symbol_table[sym[0] - 'A'][sym[1] ? sym[1] - 'a' + 1 : 0] = z;
+    }
+  g_once_init_leave (&done, 1);
 }
 
 static int
 lookup_symbol (const char *s, int n)
 {
-  /* the common one-letter symbols without a search */
-  if (n == 1)
-    switch (s[0])
-      {
-      case 'C':
-        return 6;
-      case 'N':
-        return 7;
-      case 'O':
-        return 8;
-      case 'H':
-        return 1;
-      case 'S':
-        return 16;
-      default:
-        break;
-      }
-  return lookup_symbol_slow (s, n);
+  if (s[0] < 'A' || s[0] > 'Z' || (n == 2 && (s[1] < 'a' || s[1] > 'z')))
+    return -1;
+  fill_symbol_table ();
+  return symbol_table[s[0] - 'A'][n == 2 ? s[1] - 'a' + 1 : 0];
 }
 
 /* Parses "[...]" at p->i into atom a. */
@@ -484,7 +372,8 @@ parse_atom (Parser *p, GError **error)
     {
       int bond = p->bond ? p->bond : default_bond (p, p->prev, idx);
       a->parent = p->prev;
-      if (!bond_atoms (p, p->prev, idx, bond, start, error))
+      /* a new atom cannot already be bonded: no duplicate check (ring bonds have theirs) */
+      if (add_neighbour (p, p->prev, idx, bond, error) < 0 || add_neighbour (p, idx, p->prev, bond, error) < 0)
         return FALSE;
     }
   else if (p->bond)

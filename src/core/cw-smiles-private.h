@@ -55,17 +55,31 @@ typedef struct
   guint16 pos;  /* offset of the closing digit */
 } CwSmClosure;
 
+/* Fragment text -> group, for fragments written as one stretch of text (the usual case):
+ * the same stretch with the same root is the same rooted fragment. */
+#define CW_SM_FRAG_CACHE 512
+#define CW_SM_FRAG_TEXT 40
 typedef struct
 {
-  CwSmAtom    atoms[CW_SM_MAX_ATOMS];
-  int         n_atoms;
-  CwSmClosure closures[CW_SM_MAX_CYCLES];
-  int         n_closures;
-  int         n_dots;
-  const char *text; /* borrowed, for messages */
-  int         text_len;
-  gboolean    fragment;  /* parsing a group fragment: the first atom has one more bond (to the ring) */
-  int         error_pos; /* offset named by the last error, -1 */
+  guint64     key;
+  const void *group; /* const CwGroup* */
+  guint8      len;
+  guint8      root_off;
+  char        text[CW_SM_FRAG_TEXT];
+} CwSmFragCacheEntry;
+
+typedef struct
+{
+  CwSmAtom            atoms[CW_SM_MAX_ATOMS];
+  int                 n_atoms;
+  CwSmClosure         closures[CW_SM_MAX_CYCLES];
+  int                 n_closures;
+  int                 n_dots;
+  const char         *text; /* borrowed, for messages */
+  int                 text_len;
+  gboolean            fragment;   /* parsing a group fragment: the first atom has one more bond (to the ring) */
+  int                 error_pos;  /* offset named by the last error, -1 */
+  CwSmFragCacheEntry *frag_cache; /* CW_SM_FRAG_CACHE entries, or NULL */
 } CwSmGraph;
 
 /* cw-smiles-parse.c */
@@ -101,7 +115,15 @@ void cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMo
 #define CW_SM_KEY_LEN 13
 void cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN]);
 /* Order of groups in canonical keys: table order, custom groups after the table. */
-gint64 cw_sm_group_rank (const CwGroup *group);
+static inline gint64
+cw_sm_group_rank (const CwGroup *g)
+{
+  if (g == NULL)
+    return G_GINT64_CONSTANT (1) << 40;
+  if (g->index >= 0 && !g->custom)
+    return g->index;
+  return 100000 + (g->id ? g_str_hash (g->id) % 1000000 : 0);
+}
 /* The source position of result position p (1..6), and whether faces are swapped. */
 int      cw_sm_transform_source (const CwRingTransform *t, int p);
 gboolean cw_sm_transform_swaps (const CwRingTransform *t);

@@ -240,6 +240,32 @@ describe_cycle (const Reading *r, int c, GString *s)
     g_string_append_printf (s, i ? ",%d" : "%d", r->g->atoms[r->cycle[c][i]].pos + 1);
 }
 
+/* Why a six-membered ring is not a plain cyclohexane: the first atom that disqualifies it. */
+static void
+describe_not_saturated (const Reading *r, int c, GString *s)
+{
+  for (int i = 0; i < 6; i++)
+    {
+      const CwSmAtom *a = &r->g->atoms[r->cycle[c][i]];
+      const char     *why = NULL;
+      if (a->element != 6)
+        why = _("not carbon");
+      else if (a->aromatic)
+        why = _("aromatic");
+      else if (a->charge != 0)
+        why = _("charged");
+      else if (a->isotope != 0)
+        why = _("isotope-labelled");
+      else if (!saturated_carbon (r->g, r->cycle[c][i]))
+        why = _("not saturated");
+      if (why)
+        {
+          g_string_append_printf (s, _(" (%s at character %d)"), why, a->pos + 1);
+          return;
+        }
+    }
+}
+
 static gboolean
 no_ring_error (Reading *r, GError **error)
 {
@@ -281,7 +307,7 @@ no_ring_error (Reading *r, GError **error)
       g_string_append (s, c ? "; " : _(" Rings found: "));
       describe_cycle (r, c, s);
       if (r->cycle_len[c] == 6)
-        g_string_append (s, _(" (not saturated all-carbon)"));
+        describe_not_saturated (r, c, s);
     }
   cw_sm_set_error (error, CW_CORE_ERROR_UNSUPPORTED, r->g, -1,
                    _("No cyclohexane ring (a saturated all-carbon six-membered ring) in the SMILES.%s"),
@@ -336,6 +362,63 @@ choose_ring (Reading *r, GString *notes, GError **error)
   return TRUE;
 }
 
+/* The stretch of text [*lo, *hi) that holds exactly the fragment's atoms and ring bonds, or FALSE. */
+static gboolean
+fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, int *hi)
+{
+  const CwSmGraph *g = r->g;
+  int              a = G_MAXINT, b = 0, inside = 0;
+
+  for (int k = 0; k < n; k++)
+    {
+      const CwSmAtom *x = &g->atoms[atoms[k]];
+      a = MIN (a, x->pos);
+      b = MAX (b, x->pos + x->len);
+    }
+  if (b - a > CW_SM_FRAG_TEXT)
+    return FALSE;
+  for (int k = 0; k < g->n_atoms; k++)
+    inside += g->atoms[k].pos >= a && g->atoms[k].pos < b;
+  if (inside != n)
+    return FALSE;
+  for (int c = 0; c < g->n_closures; c++)
+    if (g->closures[c].pos >= a && g->closures[c].pos < b &&
+        (r->mask[g->closures[c].a] != mark || r->mask[g->closures[c].b] != mark))
+      return FALSE;
+  *lo = a;
+  *hi = b;
+  return TRUE;
+}
+
+static const CwGroup *
+lookup_fragment (Reading *r, int root, guint8 mark, const int *atoms, int n)
+{
+  CwSmGraph          *g = r->g;
+  CwSmFragCacheEntry *e = NULL;
+  const CwGroup      *group;
+  int                 lo, hi;
+
+  if (g->frag_cache && fragment_span (r, mark, atoms, n, &lo, &hi))
+    {
+      guint64 key = 0xcbf29ce484222325ull ^ (guint64) (g->atoms[root].pos - lo);
+      for (int i = lo; i < hi; i++)
+        key = (key ^ (guchar) g->text[i]) * 0x100000001b3ull;
+      e = &g->frag_cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 1)];
+      if (e->key == key && e->len == hi - lo && e->root_off == g->atoms[root].pos - lo &&
+          memcmp (e->text, g->text + lo, hi - lo) == 0)
+        return e->group;
+      e->key = key;
+      e->len = hi - lo;
+      e->root_off = g->atoms[root].pos - lo;
+      memcpy (e->text, g->text + lo, hi - lo);
+      e->group = NULL;
+    }
+  group = cw_sm_index_lookup (r->index, cw_sm_fragment_hash (g, root, r->mask, mark));
+  if (e)
+    e->group = group; /* unknown fragments are remembered as unknown */
+  return group;
+}
+
 static gboolean
 cut_substituents (Reading *r, GError **error)
 {
@@ -373,7 +456,7 @@ cut_substituents (Reading *r, GError **error)
                     queue[tail++] = b->nb[j];
                   }
             }
-          r->sub_group[s] = cw_sm_index_lookup (r->index, cw_sm_fragment_hash (g, root, r->mask, s + 1));
+          r->sub_group[s] = lookup_fragment (r, root, s + 1, queue, tail);
           r->n_subs++;
           if (r->sub_group[s] == NULL)
             {

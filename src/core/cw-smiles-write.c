@@ -119,13 +119,11 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
 }
 
 static void
-write_numbered (const CwMolecule *m, const CwSmIndex *index, gboolean marks, GString *out)
+write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *relevant, gboolean marks, GString *out)
 {
-  gboolean       relevant[CW_RING_SIZE + 1];
   const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
   Ctx            c = { index, out };
 
-  cw_sm_relevant_carbons (m, relevant);
   for (int i = 0; i < m->n_subs; i++)
     slot[m->subs[i].position][m->subs[i].face == CW_FACE_UP ? 0 : 1] = m->subs[i].group;
   for (int p = 1; p <= CW_RING_SIZE; p++)
@@ -149,18 +147,21 @@ cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *ou
   cw_sm_canonical_transform (mol, !marks, &t);
   m.custom_groups = NULL;
   cw_sm_apply_transform (mol, &t, &m);
-  write_numbered (&m, index, marks, out);
+  cw_sm_relevant_carbons (&m, relevant);
+  write_numbered (&m, index, relevant, marks, out);
 }
 
 void
 cw_sm_write_canonical (const CwMolecule *mol, const CwSmIndex *index, GString *out)
 {
   gboolean relevant[CW_RING_SIZE + 1];
+  gboolean marks;
 
   if (mol->n_subs == 0)
     {
       g_string_append (out, "C1CCCCC1");
       return;
     }
-  write_numbered (mol, index, cw_sm_relevant_carbons (mol, relevant) >= 2, out);
+  marks = cw_sm_relevant_carbons (mol, relevant) >= 2;
+  write_numbered (mol, index, relevant, marks, out);
 }

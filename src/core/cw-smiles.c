@@ -169,6 +169,7 @@ cw_smiles_reader_new (const CwGroupTable *table)
   g_return_val_if_fail (table != NULL, NULL);
   reader = g_new0 (CwSmilesReader, 1);
   reader->index = cw_sm_index_new (table);
+  reader->graph.frag_cache = g_new0 (CwSmFragCacheEntry, CW_SM_FRAG_CACHE);
   return reader;
 }
 
@@ -178,6 +179,7 @@ cw_smiles_reader_free (CwSmilesReader *reader)
   if (reader == NULL)
     return;
   cw_sm_index_free (reader->index);
+  g_free (reader->graph.frag_cache);
   g_free (reader);
 }
 

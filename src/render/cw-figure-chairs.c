@@ -112,14 +112,7 @@ place_group (ChairLayout *cl, int k, CwPoint dir, const char *markup, double siz
         }
     }
   if (!h && cl->opt->highlight_sub == sub)
-    {
-      p = cw_scene_add (cl->scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);
-      p->x0 = place.box.x - 3;
-      p->y0 = place.box.y - 2;
-      p->x1 = place.box.w + 6;
-      p->y1 = place.box.h + 4;
-      p->fill = TRUE;
-    }
+    cw_scene_highlight (cl->scene, &place.box);
   p = cw_scene_line (cl->scene, h ? CW_ROLE_HYDROGEN : CW_ROLE_SUB_BOND, h ? CW_INK_MUTED : CW_INK_BOND,
                      a.x, a.y, place.ex, place.ey, h ? 0.8 : 1.3);
   p->halo = TRUE;
@@ -320,9 +313,16 @@ captions (CwScene *scene, const CwAnalysis *an, const CwRenderOptions *opt, int 
   p = cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, title, CAPTION_SIZE + 1, major, cx, y, 0.5, 0);
   p->chair = c;
   y += p->box.h + 1;
-  line2 = g_strdup_printf ("%s %%  <span size=\"smaller\">(%s–%s %%)</span>", pop,
-                           MIN (an->pop_low[c], an->pop_high[c]) == an->pop_low[c] ? lo : hi,
-                           MIN (an->pop_low[c], an->pop_high[c]) == an->pop_low[c] ? hi : lo);
+  {
+    gboolean    swap = an->pop_low[c] > an->pop_high[c];
+    const char *a = swap ? hi : lo, *b = swap ? lo : hi;
+
+    /* The interval for ΔG° ± 2σ; one value when both ends print alike ("<0.1"). */
+    if (g_strcmp0 (a, b) == 0)
+      line2 = g_strdup_printf ("%s %%  <span size=\"smaller\">(%s %%)</span>", pop, a);
+    else
+      line2 = g_strdup_printf ("%s %%  <span size=\"smaller\">(%s–%s %%)</span>", pop, a, b);
+  }
   p = cw_scene_text_at (scene, CW_ROLE_CAPTION, CW_INK_TEXT, line2, CAPTION_SIZE, major, cx, y, 0.5, 0);
   p->chair = c;
   y += p->box.h + 1;

@@ -107,6 +107,18 @@ cw_scene_fit_tight (CwScene *scene, double margin)
 }
 
 void
+cw_scene_highlight (CwScene *scene, const CwBox *box)
+{
+  CwPrim *p = cw_scene_add (scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);
+
+  p->x0 = box->x - 3;
+  p->y0 = box->y - 2;
+  p->x1 = box->w + 6;
+  p->y1 = box->h + 4;
+  p->fill = TRUE;
+}
+
+void
 cw_scene_message (CwScene *scene, const char *text)
 {
   g_autofree char *esc = g_markup_escape_text (text, -1);

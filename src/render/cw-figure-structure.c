@@ -35,14 +35,7 @@ place_sub (Layout *lay, const CwMolecule *mol, int i, double angle, const CwRend
 
   cw_placer_place_label (&lay->placer, sub->group->markup, LABEL_SIZE, a.x, a.y, dx, dy, base, &place, &lt);
   if (opt->highlight_sub == i)
-    {
-      p = cw_scene_add (lay->scene, CW_PRIM_RECT, CW_ROLE_NONE, CW_INK_HIGHLIGHT);
-      p->x0 = place.box.x - 3;
-      p->y0 = place.box.y - 2;
-      p->x1 = place.box.w + 6;
-      p->y1 = place.box.h + 4;
-      p->fill = TRUE;
-    }
+    cw_scene_highlight (lay->scene, &place.box);
   p = cw_scene_add (lay->scene, sub->face == CW_FACE_UP ? CW_PRIM_WEDGE : CW_PRIM_HASH,
                     CW_ROLE_SUB_BOND, CW_INK_BOND);
   p->x0 = a.x;

@@ -19,6 +19,8 @@ void cw_scene_fit (CwScene *scene, double margin);
 void  cw_scene_fit_tight (CwScene *scene, double margin);
 CwBox cw_scene_bounds (const CwScene *scene);
 void  cw_scene_message (CwScene *scene, const char *text);
+/* A filled patch behind a label, for the substituent the window has selected. */
+void cw_scene_highlight (CwScene *scene, const CwBox *box);
 /* Places text at the first candidate point (ax, ay anchor 0..1) where it overlaps no other text
  * and no listed segment; falls back to the first candidate. */
 CwPrim *cw_scene_text_free (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, const CwPoint *cands, guint n_cands, double ax, double ay);

@@ -46,8 +46,8 @@ cw_palette_get (CwInk ink, gboolean is_dark, double rgb[3])
   rgb[2] = c[2];
 }
 
-static void
-set_ink (cairo_t *cr, CwInk ink, gboolean is_dark)
+void
+cw_palette_set_source (cairo_t *cr, CwInk ink, gboolean is_dark)
 {
   double rgb[3];
 
@@ -155,7 +155,7 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
 {
   double dashes[2];
 
-  set_ink (cr, p->ink, is_dark);
+  cw_palette_set_source (cr, p->ink, is_dark);
   cairo_set_line_width (cr, p->line_width);
   cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
   cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
@@ -171,13 +171,13 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
         {
           /* Start the margin a little away from the line's own atom, which it must not erase. */
           double f = 0.22;
-          set_ink (cr, p->halo_ink, is_dark);
+          cw_palette_set_source (cr, p->halo_ink, is_dark);
           cairo_set_line_width (cr, p->line_width + 4.0);
           cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
           cairo_move_to (cr, p->x0 + (p->x1 - p->x0) * f, p->y0 + (p->y1 - p->y0) * f);
           cairo_line_to (cr, p->x1, p->y1);
           cairo_stroke (cr);
-          set_ink (cr, p->ink, is_dark);
+          cw_palette_set_source (cr, p->ink, is_dark);
           cairo_set_line_width (cr, p->line_width);
           cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
         }

@@ -40,7 +40,7 @@ cw_nice_step (double range, int target)
 static char *
 tick_label (double v, double step)
 {
-  int decimals = 0;
+  int              decimals = 0;
   g_autofree char *s = NULL;
 
   /* As many decimals as the step needs: 2.5 → one, 0.25 → two. */

@@ -18,6 +18,7 @@ PangoLayout *cw_text_layout_new (const char *markup, double size, gboolean bold,
 
 /* Palette: colours for an ink in the light (print) or dark (screen) theme. */
 void cw_palette_get (CwInk ink, gboolean dark, double rgb[3]);
+void cw_palette_set_source (cairo_t *cr, CwInk ink, gboolean dark);
 
 /* Paints a scene into (0,0,width,height) of cr, scaled uniformly from the scene's own size. */
 void cw_scene_paint (const CwScene *scene, cairo_t *cr, gboolean dark);

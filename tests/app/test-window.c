@@ -163,7 +163,7 @@ test_custom_group_dialog (void)
 {
   CwWindow  *win = new_window ();
   GtkWidget *dialog = NULL;
-  g_autoptr (GListModel) toplevels = gtk_window_get_toplevels ();
+  GListModel *toplevels = gtk_window_get_toplevels (); /* borrowed */
   const CwSubstituent *s;
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.select-carbon", "i", 2);

@@ -15,6 +15,15 @@
 static gint64   layout_start;
 static gint64   paint_end;
 static gboolean painted;
+static gint64 paint_start;
+static double layout_ms[400], paint_ms[400];
+static int nl;
+static void
+paint_cb (GdkFrameClock *clock, gpointer data)
+{
+  if (layout_start != 0 && paint_start == 0)
+    paint_start = g_get_monotonic_time ();
+}
 
 static void
 layout_cb (GdkFrameClock *clock, gpointer data)
@@ -30,6 +39,8 @@ after_paint_cb (GdkFrameClock *clock, gpointer data)
     {
       paint_end = g_get_monotonic_time ();
       painted = TRUE;
+      if (nl < 400 && paint_start) { layout_ms[nl] = (paint_start - layout_start) / 1000.0; paint_ms[nl++] = (paint_end - paint_start) / 1000.0; }
+      paint_start = 0;
     }
 }
 
@@ -80,6 +91,7 @@ main (int argc, char *argv[])
   clock = gtk_widget_get_frame_clock (GTK_WIDGET (win));
   g_signal_connect (clock, "layout", G_CALLBACK (layout_cb), NULL);
   g_signal_connect (clock, "after-paint", G_CALLBACK (after_paint_cb), NULL);
+  g_signal_connect (clock, "paint", G_CALLBACK (paint_cb), NULL);
   /* Start from a molecule with a few groups, like a real study. */
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 1, "up", "methoxycarbonyl");
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 2, "down", "bromo");
@@ -108,6 +120,9 @@ main (int argc, char *argv[])
   g_source_remove (tick);
   qsort (times, N_EDITS, sizeof (double), cmp_double);
   qsort (edit_only, N_EDITS, sizeof (double), cmp_double);
+  qsort (layout_ms, nl, sizeof (double), cmp_double);
+  qsort (paint_ms, nl, sizeof (double), cmp_double);
+  printf ("layout median %.2f paint median %.2f\n", layout_ms[nl/2], paint_ms[nl/2]);
   printf ("edits: %d\n", N_EDITS);
   printf ("edit+frame median: %.2f ms\n", times[N_EDITS / 2]);
   printf ("edit+frame p90: %.2f ms\n", times[N_EDITS * 9 / 10]);

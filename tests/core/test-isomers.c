@@ -149,6 +149,31 @@ test_identical_chairs (void)
   g_assert_cmpfloat (set->temperature, ==, 200);
 }
 
+/* Finding a document's isomer: by relative configuration, whichever enantiomer it is. */
+static void
+test_find (void)
+{
+  g_autoptr (CwIsomerSet) set = isomers_of ("CC1CCCCC1C", 298.15);
+  /* the two enantiomers of trans-1,2-dimethylcyclohexane, and the cis isomer */
+  g_autoptr (GPtrArray) a = cw_smiles_read ("C[C@H]1CCCC[C@@H]1C", data->groups, NULL, NULL);
+  g_autoptr (GPtrArray) b = cw_smiles_read ("C[C@@H]1CCCC[C@H]1C", data->groups, NULL, NULL);
+  g_autoptr (GPtrArray) c = cw_smiles_read ("C[C@H]1CCCC[C@H]1C", data->groups, NULL, NULL);
+  g_autoptr (GPtrArray) other = cw_smiles_read ("CC1CCC(C)CC1", data->groups, NULL, NULL);
+  int ia = cw_isomer_set_find (set, a->pdata[0]), ib = cw_isomer_set_find (set, b->pdata[0]);
+  int ic = cw_isomer_set_find (set, c->pdata[0]);
+
+  g_autofree char *sa = cw_smiles_write (a->pdata[0]);
+  g_autofree char *sb = cw_smiles_write (b->pdata[0]);
+
+  /* a and b: one configuration, written differently; c is the other configuration */
+  g_assert_cmpstr (sa, !=, sb);
+  g_assert_cmpint (ia, >=, 0);
+  g_assert_cmpint (ia, ==, ib);
+  g_assert_cmpint (ic, >=, 0);
+  g_assert_cmpint (ic, !=, ia);
+  g_assert_cmpint (cw_isomer_set_find (set, other->pdata[0]), ==, -1);
+}
+
 int
 main (int argc, char **argv)
 {
@@ -160,6 +185,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/isomers/counts", test_counts);
   g_test_add_func ("/core/isomers/averaging", test_averaging);
   g_test_add_func ("/core/isomers/identical-chairs", test_identical_chairs);
+  g_test_add_func ("/core/isomers/find", test_find);
   status = g_test_run ();
   cw_data_free (data);
   return status;

@@ -163,6 +163,23 @@ test_same_outline (void)
       g_assert_cmpfloat (fabs (px[0][k] - px[0][j]), >, 0.1);
 }
 
+/* Carbons 1→6 run clockwise seen from the up face (+z), as in the flat structure drawing, so
+ * both drawings show the same enantiomer. */
+static void
+test_handedness (void)
+{
+  for (int which = 0; which < 2; which++)
+    {
+      CwChair3D c;
+      double    area = 0;
+
+      cw_chair3d_build (&c, which);
+      for (int k = 0; k < 6; k++)
+        area += c.atom[k].x * c.atom[(k + 1) % 6].y - c.atom[(k + 1) % 6].x * c.atom[k].y;
+      g_assert_cmpfloat (area, <, 0); /* clockwise with y to the left of x */
+    }
+}
+
 int
 main (int argc, char **argv)
 {
@@ -172,5 +189,6 @@ main (int argc, char **argv)
   g_test_add_func ("/render/chair-geometry/alternation", test_alternation);
   g_test_add_func ("/render/chair-geometry/projection-rules", test_projection_rules);
   g_test_add_func ("/render/chair-geometry/same-outline", test_same_outline);
+  g_test_add_func ("/render/chair-geometry/handedness", test_handedness);
   return g_test_run ();
 }

@@ -88,11 +88,29 @@ test_wedges (void)
   int             n = 0;
 
   cw_render_options_init (&opt);
+  opt.highlight_sub = 2;
   scene = cw_structure_build (mol, &opt, 300, 300);
   for (guint i = 0; i < cw_scene_get_n (scene); i++)
     {
       const CwPrim *p = cw_scene_get (scene, i);
       const CwPrim *ring = NULL;
+
+      /* The selected group's label is bold on a highlight patch drawn before it; no other is. */
+      if (p->role == CW_ROLE_SUB_LABEL)
+        {
+          gboolean patch = FALSE;
+
+          for (guint j = 0; j < i; j++)
+            {
+              const CwPrim *r = cw_scene_get (scene, j);
+
+              patch |= r->kind == CW_PRIM_RECT && r->ink == CW_INK_HIGHLIGHT && r->x0 <= p->box.x &&
+                       r->x0 + r->x1 >= p->box.x + p->box.w && r->y0 <= p->box.y &&
+                       r->y0 + r->y1 >= p->box.y + p->box.h;
+            }
+          g_assert_true (p->bold == (p->sub == 2));
+          g_assert_true (patch == (p->sub == 2));
+        }
 
       if (p->role != CW_ROLE_SUB_BOND)
         continue;
@@ -107,6 +125,33 @@ test_wedges (void)
       g_assert_cmpfloat (hypot (ring->x0 - p->x0, ring->y0 - p->y0), <, 1e-9);
     }
   g_assert_cmpint (n, ==, mol->n_subs);
+}
+
+/* Position 1 at the top, then 2…6 clockwise on the page, seen from the up face (the reader's
+ * side, where solid wedges point): the same sense as the chairs (test-chair-geometry). */
+static void
+test_numbering (void)
+{
+  g_autoptr (CwMolecule) mol = cw_molecule_new ();
+  g_autoptr (CwScene) scene = NULL;
+  CwRenderOptions opt;
+  CwPoint         at[6];
+  double          area = 0;
+
+  cw_render_options_init (&opt);
+  scene = cw_structure_build (mol, &opt, 300, 300);
+  for (guint i = 0; i < cw_scene_get_n (scene); i++)
+    {
+      const CwPrim *p = cw_scene_get (scene, i);
+
+      if (p->role == CW_ROLE_RING_BOND)
+        at[p->position - 1] = (CwPoint){ p->x0, p->y0 };
+    }
+  for (int k = 1; k < 6; k++)
+    g_assert_cmpfloat (at[0].y, <, at[k].y);
+  for (int k = 0; k < 6; k++)
+    area += at[k].x * at[(k + 1) % 6].y - at[(k + 1) % 6].x * at[k].y;
+  g_assert_cmpfloat (area, >, 0); /* clockwise on a page whose y grows downwards */
 }
 
 /* Every pattern of up to twelve groups (none, up, down or both on each carbon), with long labels:
@@ -167,6 +212,7 @@ main (int argc, char **argv)
   g_test_add_func ("/render/structure/reverse", test_reverse);
   g_test_add_func ("/render/structure/anchor", test_anchor);
   g_test_add_func ("/render/structure/wedges", test_wedges);
+  g_test_add_func ("/render/structure/numbering", test_numbering);
   g_test_add_func ("/render/structure/no-overlaps", test_no_overlaps);
   return g_test_run ();
 }
