@@ -29,7 +29,6 @@ cw_window_grid_set_rows (GtkGrid     *grid,
 
       gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
       gtk_label_set_wrap (GTK_LABEL (label), i % n_columns == n_columns - 1);
-      gtk_label_set_selectable (GTK_LABEL (label), TRUE);
       gtk_grid_attach (grid, label, i % n_columns, i / n_columns, 1, 1);
       g_ptr_array_add (pool, label);
     }

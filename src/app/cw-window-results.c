@@ -60,7 +60,6 @@ flag_row (CwWindow *self,
   gtk_widget_set_valign (icon, GTK_ALIGN_START);
   gtk_label_set_wrap (GTK_LABEL (label), TRUE);
   gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
-  gtk_label_set_selectable (GTK_LABEL (label), TRUE);
   gtk_widget_set_hexpand (label, TRUE);
   gtk_box_append (GTK_BOX (row), icon);
   gtk_box_append (GTK_BOX (row), label);
@@ -139,7 +138,7 @@ set_row (CwWindow   *self,
       if (c == 3)
         {
           set_css_class (GTK_WIDGET (label), "dim-label", !heading);
-          const char      *tip = heading ? NULL : texts[c];
+          const char *tip = heading ? NULL : texts[c];
           const char *old = gtk_widget_get_tooltip_text (GTK_WIDGET (label));
 
           if (g_strcmp0 (old, tip) != 0)
@@ -174,8 +173,11 @@ term_row (CwWindow     *self,
   g_autofree char *label = cw_term_dup_label (t, cw_document_peek_molecule (self->doc));
   g_autofree char *e1 = t1 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t1->energy, unit)) : g_strdup ("–");
   g_autofree char *e2 = t2 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t2->energy, unit)) : g_strdup ("–");
-  g_autofree char *source = t->estimated ? g_strdup_printf (_("estimate: %s"), t->source ? t->source : "")
-                                         : g_strdup (t->source ? t->source : "");
+  const char      *src = t->source ? t->source : "";
+  /* Estimated terms say so; the table's own fall-back text may already begin with it. */
+  g_autofree char *source = t->estimated && g_ascii_strncasecmp (src, "estimate", 8) != 0
+    ? g_strdup_printf (_("estimate: %s"), src)
+    : g_strdup (src);
   const char *texts[N_COLUMNS] = { label, e1, e2, source };
 
   set_row (self, row, texts, FALSE);
@@ -263,12 +265,14 @@ update_summary (CwWindow *self)
                              cw_energy_from_kcal (an->delta_g, unit), cw_energy_from_kcal (an->sigma, unit),
                              cw_energy_unit_symbol (unit), t, kstr);
   gtk_label_set_text (self->summary_label, text);
+  /* Screen readers get the result with the drawing it belongs to. */
+  gtk_accessible_update_property (GTK_ACCESSIBLE (self->chairs_area), GTK_ACCESSIBLE_PROPERTY_DESCRIPTION, text, -1);
 }
 
 void
 cw_window_update_results (CwWindow *self)
 {
   update_summary (self);
-  if (!g_getenv ("CW_NOTERMS")) update_terms (self);
-  if (!g_getenv ("CW_NOFLAGS")) update_flags (self);
+  update_terms (self);
+  update_flags (self);
 }

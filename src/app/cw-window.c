@@ -200,9 +200,6 @@ cw_window_refresh (CwWindow *self)
   if (!self->an_valid)
     self->analysis_error = g_strdup (error->message);
 
-  if (g_getenv ("CW_FLOOR")) { gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
-  if (g_getenv ("CW_FLOOR2")) { cw_ring_canvas_set_molecule (self->ring_canvas, mol); gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
-  if (g_getenv ("CW_FLOOR3")) { cw_ring_canvas_set_molecule (self->ring_canvas, mol); update_editor (self); cw_window_update_results (self); gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area)); gtk_widget_queue_draw (GTK_WIDGET (self->profile_area)); return; }
   if (n_custom != self->n_custom_shown)
     update_groups_store (self);
   cw_ring_canvas_set_molecule (self->ring_canvas, mol);
@@ -539,6 +536,13 @@ cw_window_init (CwWindow *self)
   if (g_settings_get_boolean (self->settings, "window-maximized"))
     gtk_window_maximize (GTK_WINDOW (self));
 
+  /* The chooser's button is what takes the focus: give it the slot's name. */
+  gtk_accessible_update_property (GTK_ACCESSIBLE (gtk_widget_get_template_child (GTK_WIDGET (self->up_chooser),
+                                                                                 CW_TYPE_GROUP_CHOOSER, "button")),
+                                  GTK_ACCESSIBLE_PROPERTY_LABEL, _("Group on the up face"), -1);
+  gtk_accessible_update_property (GTK_ACCESSIBLE (gtk_widget_get_template_child (GTK_WIDGET (self->down_chooser),
+                                                                                 CW_TYPE_GROUP_CHOOSER, "button")),
+                                  GTK_ACCESSIBLE_PROPERTY_LABEL, _("Group on the down face"), -1);
   cw_group_chooser_set_model (self->up_chooser, G_LIST_MODEL (self->groups_store));
   cw_group_chooser_set_model (self->down_chooser, G_LIST_MODEL (self->groups_store));
   cw_group_chooser_set_energy_unit (self->up_chooser, cw_window_get_energy_unit (self));

@@ -58,6 +58,34 @@ cw_sm_element_symbol (int z)
   return z >= 0 && z < N_ELEMENTS ? element_symbols[z] : "?";
 }
 
+/* text[from, to) as valid UTF-8: control bytes become '?', invalid sequences U+FFFD. */
+char *
+cw_sm_valid_text (const char *text, int from, int to)
+{
+  g_autofree char *copy = g_strndup (text + from, to - from);
+
+  for (char *c = copy; *c; c++)
+    if ((guchar) *c < 0x20 || *c == 0x7f)
+      *c = '?';
+  return g_utf8_make_valid (copy, -1);
+}
+
+char *
+cw_sm_describe_char (const char *text, int len, int i)
+{
+  guchar c = text[i];
+  int    n = c < 0x80 ? 1 : c >= 0xf0 ? 4
+                          : c >= 0xe0 ? 3
+                          : c >= 0xc0 ? 2
+                                      : 0;
+
+  if (c >= 0x20 && c < 0x7f)
+    return g_strdup_printf ("‘%c’", c);
+  if (n > 1 && i + n <= len && g_utf8_validate (text + i, n, NULL))
+    return g_strdup_printf ("‘%.*s’", n, text + i);
+  return g_strdup_printf ("byte 0x%02X", c);
+}
+
 void
 cw_sm_set_error (GError         **error,
                  int              code,
@@ -69,6 +97,8 @@ cw_sm_set_error (GError         **error,
   va_list          ap;
   g_autofree char *what = NULL;
   g_autofree char *excerpt = NULL;
+  g_autofree char *before = NULL;
+  g_autofree char *prefix = NULL;
   int              from, to;
 
   if (g != NULL)
@@ -83,11 +113,19 @@ cw_sm_set_error (GError         **error,
       g_set_error_literal (error, CW_CORE_ERROR, code, what);
       return;
     }
-  /* Show up to 30 characters either side, with a caret under the position. */
+  /* Show up to 30 bytes either side (whole UTF-8 characters), with a caret under the position;
+   * positions are counted in characters. */
+  pos = MIN (pos, g->text_len);
   from = MAX (0, pos - 30);
   to = MIN (g->text_len, pos + 30);
-  excerpt = g_strndup (g->text + from, to - from);
-  g_set_error (error, CW_CORE_ERROR, code, _("SMILES, character %d: %s\n  %s%s\n  %*s^"), pos + 1, what, from > 0 ? "…" : "", excerpt, (int) (pos - from + (from > 0 ? 1 : 0)), "");
+  while (from > 0 && ((guchar) g->text[from] & 0xc0) == 0x80)
+    from--;
+  while (to < g->text_len && ((guchar) g->text[to] & 0xc0) == 0x80)
+    to++;
+  excerpt = cw_sm_valid_text (g->text, from, to);
+  before = cw_sm_valid_text (g->text, from, pos);
+  prefix = cw_sm_valid_text (g->text, 0, pos);
+  g_set_error (error, CW_CORE_ERROR, code, _("SMILES, character %ld: %s\n  %s%s\n  %*s^"), g_utf8_strlen (prefix, -1) + 1, what, from > 0 ? "…" : "", excerpt, (int) (g_utf8_strlen (before, -1) + (from > 0 ? 1 : 0)), "");
 }
 
 static inline int
@@ -104,23 +142,6 @@ add_neighbour (Parser *p, int atom, int other, int bond, GError **error)
   a->nb[a->degree] = other;
   a->bond[a->degree] = bond;
   return a->degree++;
-}
-
-static gboolean
-bond_atoms (Parser *p, int a, int b, int bond, int pos, GError **error)
-{
-  CwSmAtom *x = &p->g->atoms[a];
-
-  for (int k = 0; k < x->degree; k++)
-    if (x->nb[k] == b)
-      {
-        cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, pos,
-                         _("these two atoms are already bonded"));
-        return FALSE;
-      }
-  if (add_neighbour (p, a, b, bond, error) < 0 || add_neighbour (p, b, a, bond, error) < 0)
-    return FALSE;
-  return TRUE;
 }
 
 static int
@@ -267,8 +288,9 @@ parse_bracket (Parser *p, CwSmAtom *a, GError **error)
     }
   if (i != close)
     {
+      g_autofree char *bad = cw_sm_describe_char (s, p->len, i);
       cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, i,
-                       _("unexpected ‘%c’ in a bracket atom"), s[i]);
+                       _("unexpected %s in a bracket atom"), bad);
       return FALSE;
     }
   p->i = close + 1;
@@ -336,10 +358,14 @@ parse_organic (Parser *p, CwSmAtom *a, GError **error)
       a->element = 0;
       break;
     default:
-      cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i,
-                       g_ascii_isalpha (c) ? _("‘%c’ is not an atom of the organic subset; write it in brackets, e.g. [%c]")
-                                           : _("unexpected character ‘%c’"),
-                                                c, c);
+      if (g_ascii_isalpha (c))
+        cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i,
+                         _("‘%c’ is not an atom of the organic subset; write it in brackets, e.g. [%c]"), c, c);
+      else
+        {
+          g_autofree char *bad = cw_sm_describe_char (s, p->len, p->i);
+          cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i, _("unexpected character %s"), bad);
+        }
       return FALSE;
     }
   p->i++;
@@ -510,14 +536,17 @@ parse_loop (Parser *p, GError **error)
               cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i, _("a branch must follow an atom"));
               return FALSE;
             }
+          if (p->i + 1 < p->len && (p->s[p->i + 1] == ')' || p->s[p->i + 1] == '('))
+            {
+              cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i + 1,
+                               p->s[p->i + 1] == ')' ? _("empty branch") : _("a branch must start with an atom or a bond"));
+              return FALSE;
+            }
+          /* each open branch follows its own atom, so depth < number of atoms <= the stack */
+          g_assert (p->depth < CW_SM_MAX_ATOMS);
           p->stack_pos[p->depth] = p->i;
           p->stack[p->depth++] = p->prev;
           p->i++;
-          if (p->i < p->len && p->s[p->i] == ')')
-            {
-              cw_sm_set_error (error, CW_CORE_ERROR_PARSE, p->g, p->i, _("empty branch"));
-              return FALSE;
-            }
         }
       else if (c == ')')
         {

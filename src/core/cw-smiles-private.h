@@ -88,8 +88,12 @@ int         cw_sm_atom_valence (const CwSmGraph *g, int atom); /* sum of bond or
 gboolean    cw_sm_is_hydrogen (const CwSmGraph *g, int atom);  /* a plain [H] atom */
 int         cw_sm_total_h (const CwSmGraph *g, int atom);      /* hcount + [H] neighbours */
 const char *cw_sm_element_symbol (int z);
-void        cw_sm_perceive_aromatic_rings (CwSmGraph *g);
-void        cw_sm_set_error (GError **error, int code, const CwSmGraph *g, int pos, const char *format, ...)
+/* The character at text[i] for a message: ‘c’, the UTF-8 character, or "byte 0xNN". */
+char *cw_sm_describe_char (const char *text, int len, int i);
+/* text[from, to) as valid UTF-8 for a message: control bytes '?', invalid sequences U+FFFD. */
+char *cw_sm_valid_text (const char *text, int from, int to);
+void  cw_sm_perceive_aromatic_rings (CwSmGraph *g);
+void  cw_sm_set_error (GError **error, int code, const CwSmGraph *g, int pos, const char *format, ...)
   G_GNUC_PRINTF (5, 6);
 
 /* cw-smiles-frag.c: rooted fragments. mask[atom] == mark selects the fragment's atoms. */

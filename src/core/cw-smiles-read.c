@@ -96,7 +96,8 @@ choose_component (Reading *r, GString *notes, CwSmilesInfo *info)
                 from = MIN (from, g->atoms[i].pos);
                 to = MAX (to, g->atoms[i].pos + g->atoms[i].len);
               }
-          g_string_append_printf (notes, " %.*s", to - from, g->text + from);
+          g_autofree char *part = cw_sm_valid_text (g->text, from, to);
+          g_string_append_printf (notes, " %s", part);
         }
       g_string_append (notes, ".\n");
     }
@@ -362,7 +363,8 @@ choose_ring (Reading *r, GString *notes, GError **error)
   return TRUE;
 }
 
-/* The stretch of text [*lo, *hi) that holds exactly the fragment's atoms and ring bonds, or FALSE. */
+/* The stretch of text [*lo, *hi) that holds exactly the fragment's atoms and all of its ring
+ * bonds, or FALSE. Ring-bond digits after the last atom belong to it and are included. */
 static gboolean
 fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, int *hi)
 {
@@ -375,6 +377,19 @@ fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, 
       a = MIN (a, x->pos);
       b = MAX (b, x->pos + x->len);
     }
+  while (b < g->text_len)
+    {
+      char c = g->text[b];
+      if (g_ascii_isdigit (c))
+        b++;
+      else if (c == '%' && b + 2 < g->text_len && g_ascii_isdigit (g->text[b + 1]) && g_ascii_isdigit (g->text[b + 2]))
+        b += 3;
+      else if ((c == '-' || c == '=' || c == '#' || c == '$' || c == ':' || c == '/' || c == '\\') &&
+               b + 1 < g->text_len && (g_ascii_isdigit (g->text[b + 1]) || g->text[b + 1] == '%'))
+        b++;
+      else
+        break;
+    }
   if (b - a > CW_SM_FRAG_TEXT)
     return FALSE;
   for (int k = 0; k < g->n_atoms; k++)
@@ -382,9 +397,12 @@ fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, 
   if (inside != n)
     return FALSE;
   for (int c = 0; c < g->n_closures; c++)
-    if (g->closures[c].pos >= a && g->closures[c].pos < b &&
-        (r->mask[g->closures[c].a] != mark || r->mask[g->closures[c].b] != mark))
-      return FALSE;
+    {
+      gboolean in_a = r->mask[g->closures[c].a] == mark, in_b = r->mask[g->closures[c].b] == mark;
+      gboolean here = g->closures[c].pos >= a && g->closures[c].pos < b;
+      if ((in_a || in_b || here) && !(in_a && in_b && here))
+        return FALSE;
+    }
   *lo = a;
   *hi = b;
   return TRUE;

@@ -279,7 +279,10 @@ cw_smiles_read (const char *smiles, const CwGroupTable *table, GString *notes, G
       while (g_ascii_isspace (*rest))
         rest++;
       if (*rest)
-        g_string_append_printf (notes, _("Text after the SMILES was ignored: “%s”.\n"), rest);
+        {
+          g_autofree char *shown = cw_sm_valid_text (rest, 0, strlen (rest));
+          g_string_append_printf (notes, _("Text after the SMILES was ignored: “%s”.\n"), shown);
+        }
     }
   reader = cw_smiles_reader_new (table);
   mols = g_new (CwMolecule, READ_MAX);

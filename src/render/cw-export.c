@@ -250,9 +250,10 @@ cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc
 
 typedef struct
 {
-  const CwData     *data;
-  const CwDocument *doc;
-  const CwAnalysis *an;
+  const CwData         *data;
+  const CwGeometryData *gd;
+  const CwDocument     *doc;
+  const CwAnalysis     *an;
 } ReportJob;
 
 static void
@@ -260,14 +261,20 @@ draw_report (cairo_t *cr, gpointer user_data, double width, double height)
 {
   ReportJob *rj = user_data;
 
-  cw_render_report (cr, rj->data, rj->doc, rj->an, width, height);
+  cw_render_report_with_geometry (cr, rj->data, rj->gd, rj->doc, rj->an, width, height);
 }
 
 gboolean
 cw_render_export_report (const CwData *data, const CwDocument *doc, const char *paper, const char *path, GError **error)
 {
+  return cw_render_export_report_with_geometry (data, NULL, doc, paper, path, error);
+}
+
+gboolean
+cw_render_export_report_with_geometry (const CwData *data, const CwGeometryData *gd, const CwDocument *doc, const char *paper, const char *path, GError **error)
+{
   CwAnalysis  an;
-  ReportJob   rj = { data, doc, &an };
+  ReportJob   rj = { data, gd, doc, &an };
   Job         job = { 0 };
   const char *dot;
 

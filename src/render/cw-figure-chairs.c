@@ -4,6 +4,7 @@
 #include <math.h>
 #include <string.h>
 
+#include "cw-figure-reaction.h"
 #include "cw-figures.h"
 #include "cw-label.h"
 #include "cw-render-private.h"
@@ -40,6 +41,7 @@ typedef struct
   gboolean               major;    /* drawn on the major chair's panel */
   const int             *order;    /* substituents in placing order */
   int                    failures; /* labels that found no clear spot */
+  const CwReactivity    *react;    /* reaction geometry to mark, or NULL */
 } ChairLayout;
 
 static CwPoint
@@ -155,7 +157,7 @@ draw_substituents (ChairLayout *cl)
       place_group (cl, k, dir, s->group->markup, LABEL_SIZE, 0.8 * cl->bond, CW_ROLE_SUB_LABEL, i, axial,
                    &cl->sub[i]);
     }
-  if (!cl->opt->show_hydrogens)
+  if (!cl->opt->show_hydrogens && cl->react == NULL)
     return;
   for (int k = 0; k < 6; k++)
     for (int ax = 1; ax >= 0; ax--)
@@ -238,6 +240,8 @@ draw_chair_once (ChairLayout *cl, gboolean major)
           cl->sub[term->sub_a].placed && cl->sub[term->sub_b].placed)
         mark_term (cl, term, centre);
     }
+  if (cl->react != NULL)
+    cw_chairs_reaction_mark (cl->scene, &cl->placer, cl->mol, cl->react, cl->opt, cl->which);
   cw_placer_clear (&cl->placer);
 }
 
@@ -368,6 +372,9 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
   CwScene         *part[2];
   double           cap_y, top = G_MAXDOUBLE, bottom = -G_MAXDOUBLE;
 
+  g_autofree CwReactivity *react_owned = NULL;
+  const CwReactivity      *react = cw_chairs_reaction_prepare (mol, an, opt, &react_owned);
+
   cw_text_measure (kline, CAPTION_SIZE, FALSE, 0, 0, 0, &km);
   cw_text_measure (gline, CAPTION_SIZE - 1, FALSE, 0, 0, 0, &gm);
   gap = MAX (30, 0.5 * MAX (km.w, gm.w)) + 10;
@@ -377,6 +384,7 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
       ChairLayout cl = { NULL, mol, an, opt, bond };
 
       cl.which = c;
+      cl.react = react;
       part[c] = draw_chair (&cl, decided && an->major == c, width, height);
       cb[c] = cw_scene_bounds (part[c]);
       top = MIN (top, cb[c].y);
@@ -399,6 +407,8 @@ cw_chairs_build (const CwMolecule *mol, const CwAnalysis *an, const CwRenderOpti
     captions (scene, an, opt, c, cx[c], cap_y, decided && an->major == c);
   bounds = cw_scene_bounds (scene);
   legend (scene, opt, bounds.y + bounds.h + 16);
+  if (react != NULL)
+    cw_chairs_reaction_legend (scene, scene->width / 2 - 190, bounds.y + bounds.h + 32);
   if (decided)
     {
       /* A faint panel behind the major chair, painted first; the caption says "major" too. */

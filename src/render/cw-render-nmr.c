@@ -14,20 +14,11 @@
 #define COL_CELL 178.0
 
 static void
-set_ink (cairo_t *cr, CwInk ink, gboolean dark)
-{
-  double rgb[3];
-
-  cw_palette_get (ink, dark, rgb);
-  cairo_set_source_rgb (cr, rgb[0], rgb[1], rgb[2]);
-}
-
-static void
 show (cairo_t *cr, const char *markup, double x, double y, gboolean bold, CwInk ink, gboolean dark)
 {
   g_autoptr (PangoLayout) layout = cw_text_layout_new (markup, TEXT_SIZE, bold, -1);
 
-  set_ink (cr, ink, dark);
+  cw_palette_set_source (cr, ink, dark);
   cairo_move_to (cr, x, y);
   pango_cairo_show_layout (cr, layout);
   cairo_new_path (cr);
@@ -41,8 +32,8 @@ cw_render_couplings_table_size (const CwCouplings *c, double *width, double *hei
   *height = 2 * PAD + ROW * (c->n_protons + 2) + 8;
 }
 
-static char *
-cell_markup (const CwRingProton *p, int column)
+char *
+cw_render_couplings_dup_cell (const CwRingProton *p, int column)
 {
   g_autofree char *m = cw_multiplet_dup_text (&p->multiplet[column]);
   g_autofree char *escaped = g_markup_escape_text (m, -1);
@@ -68,7 +59,7 @@ draw_header (cairo_t *cr, const CwCouplings *c, gboolean dark)
   show (cr, h1, x + COL_PROTON, PAD, TRUE, CW_INK_SERIES_1, dark);
   show (cr, h2, x + COL_PROTON + COL_CELL, PAD, TRUE, CW_INK_SERIES_2, dark);
   show (cr, ha, x + COL_PROTON + 2 * COL_CELL, PAD, TRUE, CW_INK_TEXT, dark);
-  set_ink (cr, CW_INK_GRID, dark);
+  cw_palette_set_source (cr, CW_INK_GRID, dark);
   cairo_set_line_width (cr, 0.75);
   cairo_move_to (cr, PAD, PAD + ROW + 1);
   cairo_line_to (cr, PAD + COL_PROTON + 3 * COL_CELL, PAD + ROW + 1);
@@ -85,14 +76,14 @@ draw_row (cairo_t *cr, const CwCouplings *c, int i, gboolean highlight, gboolean
 
   if (highlight)
     {
-      set_ink (cr, CW_INK_HIGHLIGHT, dark);
+      cw_palette_set_source (cr, CW_INK_HIGHLIGHT, dark);
       cairo_rectangle (cr, PAD - 2, y - 1, COL_PROTON + 3 * COL_CELL + 4, ROW);
       cairo_fill (cr);
     }
   show (cr, escaped, PAD, y, FALSE, CW_INK_TEXT, dark);
   for (int col = 0; col < 3; col++)
     {
-      g_autofree char *cell = cell_markup (p, col);
+      g_autofree char *cell = cw_render_couplings_dup_cell (p, col);
       show (cr, cell, PAD + COL_PROTON + col * COL_CELL, y, FALSE, CW_INK_TEXT, dark);
     }
 }
@@ -115,7 +106,7 @@ cw_render_couplings_table (cairo_t *cr, const CwCouplings *c, int highlight_prot
 
   g_return_if_fail (cr != NULL && c != NULL);
   cairo_save (cr);
-  set_ink (cr, CW_INK_BACKGROUND, dark);
+  cw_palette_set_source (cr, CW_INK_BACKGROUND, dark);
   cairo_rectangle (cr, 0, 0, width, height);
   cairo_fill (cr);
   cw_render_couplings_table_size (c, &nw, &nh);

@@ -17,6 +17,9 @@ void cw_render_couplings_table_size (const CwCouplings *c, double *width, double
  * the highlight ink. dark selects the screen palette. The cairo state is left as found. */
 void cw_render_couplings_table (cairo_t *cr, const CwCouplings *c, int highlight_proton, gboolean dark,
                                 double width, double height);
+/* One cell's markup: column 0 or 1 (chair 1, 2) "<b>ax</b>  tt, 11.6, 4.1 Hz  Σ 30.6" (the Σ part
+ * faint), column 2 (averaged) the same without ax/eq. Newly allocated; shared with the report. */
+char *cw_render_couplings_dup_cell (const CwRingProton *p, int column);
 /* clang-format on */
 
 G_END_DECLS

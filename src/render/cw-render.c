@@ -23,6 +23,9 @@ cw_render_options_init (CwRenderOptions *opt)
   opt->show_hydrogens = FALSE;
   opt->dark = FALSE;
   opt->highlight_sub = -1;
+  opt->highlight_reactivity = FALSE;
+  opt->reactivity_sub = -1;
+  opt->reactivity = NULL;
   opt->temperature_unit = CW_TUNIT_KELVIN;
 }
 

@@ -3,6 +3,8 @@
 #include <cairo.h>
 
 #include "cw-core.h"
+#include "cw-couplings.h"
+#include "cw-reactivity.h"
 
 G_BEGIN_DECLS
 
@@ -25,6 +27,14 @@ typedef struct
   gboolean          dark;             /* screen only; exports always light */
   int               highlight_sub;    /* -1 none */
   CwTemperatureUnit temperature_unit; /* axis of the scan figure */
+  /* Reaction geometry on the chairs: when TRUE, the ring hydrogens are drawn, each leaving
+   * group's bond is drawn heavy and the β-hydrogens anti-periplanar to it are ringed and
+   * labelled "ap" in each chair (not by colour alone). reactivity_sub narrows it to one leaving
+   * group (a substituent index; -1: every leaving group). reactivity is borrowed and may be NULL:
+   * then it is computed from the default geometry table (cw_render_default_geometry). */
+  gboolean            highlight_reactivity;
+  int                 reactivity_sub;
+  const CwReactivity *reactivity;
 } CwRenderOptions;
 
 typedef enum
@@ -48,9 +58,21 @@ gboolean    cw_render_export_figure (CwFigure fig, const CwData *data, const CwD
 /* One-page PDF report; paper is "a4" or "letter". */
 gboolean    cw_render_export_report (const CwData *data, const CwDocument *doc, const char *paper,
                                      const char *path, GError **error);
-/* The report drawn onto any cairo_t with a page of width × height points (used by export and tests). */
+/* The same, with the couplings and reaction-geometry sections computed from gd (NULL: the
+ * default geometry table, as cw_render_export_report does). */
+gboolean    cw_render_export_report_with_geometry (const CwData *data, const CwGeometryData *gd,
+                                                   const CwDocument *doc, const char *paper,
+                                                   const char *path, GError **error);
+/* The report drawn onto any cairo_t with a page of width × height points (used by export and
+ * tests); gd may be NULL as above. */
 void        cw_render_report (cairo_t *cr, const CwData *data, const CwDocument *doc,
                               const CwAnalysis *an, double width, double height);
+void        cw_render_report_with_geometry (cairo_t *cr, const CwData *data, const CwGeometryData *gd,
+                                            const CwDocument *doc, const CwAnalysis *an,
+                                            double width, double height);
+/* geometry.json of cw_data_find_dir (), loaded once and kept for the process; NULL (and error
+ * set) when it cannot be read. */
+const CwGeometryData *cw_render_default_geometry (GError **error);
 gboolean    cw_render_figure_from_string (const char *s, CwFigure *fig);
 const char *cw_render_figure_to_string (CwFigure fig);
 const char *cw_render_version (void);

@@ -53,7 +53,8 @@ typedef enum
   CW_ROLE_CURVE,
   CW_ROLE_LEVEL,
   CW_ROLE_LEGEND,
-  CW_ROLE_MARKER
+  CW_ROLE_MARKER,
+  CW_ROLE_REACTION_MARK /* chairs: ring and "ap" label of an anti-periplanar β-hydrogen */
 } CwRole;
 
 typedef enum

@@ -161,9 +161,9 @@ test_geminal_and_custom (void)
 static void
 test_custom_group_dialog (void)
 {
-  CwWindow  *win = new_window ();
-  GtkWidget *dialog = NULL;
-  GListModel *toplevels = gtk_window_get_toplevels (); /* borrowed */
+  CwWindow            *win = new_window ();
+  GtkWidget           *dialog = NULL;
+  GListModel          *toplevels = gtk_window_get_toplevels (); /* borrowed */
   const CwSubstituent *s;
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.select-carbon", "i", 2);
@@ -234,6 +234,43 @@ test_save_open_round_trip (void)
   }
   destroy_window (other);
   destroy_window (win);
+}
+
+static void
+test_drop_document (void)
+{
+  CwWindow        *win = new_window ();
+  CwWindow        *target;
+  g_autofree char *path = app_test_tmp_path ("dropped.json");
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GListModel) controllers = NULL;
+  GSList  *list = g_slist_prepend (NULL, file);
+  GValue   value = G_VALUE_INIT;
+  gboolean handled = FALSE;
+
+  /* Write a document, then drop it on a fresh window: the window opens it. */
+  set_group (win, 2, "down", "phenyl");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save-to", "s", path);
+  destroy_window (win);
+
+  target = new_window ();
+  controllers = gtk_widget_observe_controllers (GTK_WIDGET (target));
+  g_value_init (&value, GDK_TYPE_FILE_LIST);
+  g_value_take_boxed (&value, gdk_file_list_new_from_list (list));
+  g_slist_free (list);
+  for (guint i = 0; i < g_list_model_get_n_items (controllers); i++)
+    {
+      g_autoptr (GObject) c = g_list_model_get_item (controllers, i);
+
+      if (GTK_IS_DROP_TARGET (c))
+        g_signal_emit_by_name (c, "drop", &value, 10.0, 10.0, &handled);
+    }
+  g_value_unset (&value);
+  g_assert_true (handled);
+  g_assert_nonnull (cw_window_get_file (target));
+  g_assert_true (g_file_equal (cw_window_get_file (target), file));
+  g_assert_nonnull (cw_molecule_get (cw_document_peek_molecule (cw_window_get_document (target)), 2, CW_FACE_DOWN));
+  destroy_window (target);
 }
 
 static void
@@ -399,6 +436,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
   g_test_add_func ("/app/window/save-open-round-trip", test_save_open_round_trip);
   g_test_add_func ("/app/window/open-bad-file", test_open_bad_file);
+  g_test_add_func ("/app/window/drop-document", test_drop_document);
   g_test_add_func ("/app/window/export", test_export);
   g_test_add_func ("/app/window/copy-figure", test_copy_figure);
   g_test_add_func ("/app/window/unsaved-changes", test_unsaved_changes);

@@ -82,8 +82,13 @@ main (int argc, char **argv)
   g_autofree char *pdf = g_build_filename (dir, "report.pdf", NULL);
   g_autofree char *png = g_build_filename (dir, "chairs.png", NULL);
   const char      *spec = "1u=tert-butyl 3u=methyl 4d=methoxycarbonyl";
-  double           report, chairs, report_wall, chairs_wall;
-  int              failed = 0;
+  /* Neomenthyl chloride: a leaving group, so every report section is filled and the chairs carry
+   * the reaction marks. */
+  const char *spec_lg = "1u=isopropyl 2u=chloro 4d=methyl";
+  g_autoptr (CwMolecule) mol_lg = NULL;
+  g_autoptr (CwDocument) doc_lg = cw_document_new ();
+  double report, chairs, report_wall, chairs_wall, report_lg, report_lg_wall;
+  int    failed = 0;
 
   if (data == NULL)
     g_error ("%s", error->message);
@@ -93,12 +98,19 @@ main (int argc, char **argv)
   cw_document_set_molecule (doc, mol);
   report = median_ms (report_job, data, doc, pdf, 15, &report_wall);
   chairs = median_ms (chairs_job, data, doc, png, 15, &chairs_wall);
-  printf ("1..2\n");
+  mol_lg = cw_molecule_new_from_spec (spec_lg, data->groups, &error);
+  if (mol_lg == NULL)
+    g_error ("%s", error->message);
+  cw_document_set_molecule (doc_lg, mol_lg);
+  report_lg = median_ms (report_job, data, doc_lg, pdf, 15, &report_lg_wall);
+  printf ("1..3\n");
   printf ("%s 1 - report PDF %.1f ms CPU, %.1f ms wall (medians of 15) for %s; target < 150 ms\n",
           report < 150 ? "ok" : "not ok", report, report_wall, spec);
   printf ("%s 2 - chairs PNG at 300 dpi %.1f ms CPU, %.1f ms wall (medians of 15); target < 50 ms\n",
           chairs < 50 ? "ok" : "not ok", chairs, chairs_wall);
-  failed = report >= 150 || chairs >= 50;
+  printf ("%s 3 - report PDF %.1f ms CPU, %.1f ms wall (medians of 15) for %s; target < 150 ms\n",
+          report_lg < 150 ? "ok" : "not ok", report_lg, report_lg_wall, spec_lg);
+  failed = report >= 150 || chairs >= 50 || report_lg >= 150;
   g_unlink (pdf);
   g_unlink (png);
   g_rmdir (dir);

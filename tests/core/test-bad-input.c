@@ -17,6 +17,7 @@
 #include <sys/resource.h>
 #include <sys/stat.h>
 #include <sys/types.h>
+#include <sys/wait.h>
 #include <unistd.h>
 
 #include "cw-smiles.h"
@@ -492,6 +493,64 @@ test_read_only_folder (void)
   }
 }
 
+/* kill -9 in the middle of saving: a child saves two versions in turn as fast as it can and is
+ * killed at varied moments. After every kill the file is exactly one version or the other (never
+ * empty, truncated or mixed), and so is its .bak. */
+static void
+test_kill_during_save (void)
+{
+  g_autofree char *dir = make_dir ();
+  g_autofree char *path = g_build_filename (dir, "study.json", NULL);
+  g_autofree char *bak = g_strconcat (path, ".bak", NULL);
+  g_autoptr (CwDocument) a = sample_document ("version A", 512 * 1024);
+  g_autoptr (CwDocument) b = sample_document ("version B", 256 * 1024);
+  g_autofree char *text_a = cw_document_to_data (a, NULL);
+  g_autofree char *text_b = cw_document_to_data (b, NULL);
+  int kills = 0;
+
+  g_assert_true (cw_document_save (a, path, TRUE, NULL));
+  g_assert_true (cw_document_save (a, path, TRUE, NULL)); /* now there is a .bak too */
+  for (int round = 0; round < 12; round++)
+    {
+      pid_t pid = fork ();
+      int wstatus = 0;
+
+      g_assert_cmpint (pid, >=, 0);
+      if (pid == 0)
+        {
+          for (int i = 0;; i++)
+            if (!cw_document_save (i % 2 ? a : b, path, TRUE, NULL))
+              _exit (3);
+        }
+      g_usleep (20000 + 7919 * round % 60000); /* 20–80 ms: lands at different points of a save */
+      kill (pid, SIGKILL);
+      g_assert_cmpint (waitpid (pid, &wstatus, 0), ==, pid);
+      g_assert_true (WIFSIGNALED (wstatus) && WTERMSIG (wstatus) == SIGKILL);
+      kills++;
+      {
+        g_autofree char *now = NULL, *prev = NULL;
+
+        g_assert_true (g_file_get_contents (path, &now, NULL, NULL));
+        g_assert_true (g_strcmp0 (now, text_a) == 0 || g_strcmp0 (now, text_b) == 0);
+        g_assert_true (g_file_get_contents (bak, &prev, NULL, NULL));
+        g_assert_true (g_strcmp0 (prev, text_a) == 0 || g_strcmp0 (prev, text_b) == 0);
+      }
+    }
+  g_test_message ("%d kills; entries left in the folder: %" G_GSIZE_FORMAT, kills, count_entries (dir));
+  {
+    /* temporary files a killed save leaves behind are the only clutter */
+    g_autoptr (GDir) d = g_dir_open (dir, 0, NULL);
+    const char *name;
+
+    while ((name = g_dir_read_name (d)) != NULL)
+      {
+        g_autofree char *full = g_build_filename (dir, name, NULL);
+        g_remove (full);
+      }
+  }
+  g_rmdir (dir);
+}
+
 /* A molecule built by hand with three groups on one carbon (the loaders never make one) is
  * refused by the engine with the carbon named. */
 static void
@@ -675,6 +734,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/bad-input/fifo", test_fifo);
   g_test_add_func ("/core/bad-input/full-disk", test_full_disk);
   g_test_add_func ("/core/bad-input/read-only-folder", test_read_only_folder);
+  g_test_add_func ("/core/bad-input/kill-during-save", test_kill_during_save);
   g_test_add_func ("/core/bad-input/three-on-one-carbon", test_three_on_one_carbon);
   g_test_add_func ("/core/bad-input/spec-and-temperature", test_spec_and_temperature);
   g_test_add_func ("/core/bad-input/tables", test_tables);

@@ -342,6 +342,41 @@ test_garbage (void)
     }
 }
 
+/* A reader that has seen other SMILES (its fragment cache filled) reads each one as a fresh
+ * reader does, also where the same stretch of text closes its rings differently. */
+static void
+test_reader_history (void)
+{
+  const char *seq[] = { "OC1CCCCC1c2ccccc2", "OC1CCCCC1c2ccccc=2", "CC1(c2ccc2)CCCCC1", "CC1(c2ccccc2)CCCCC1",
+                        "OC1CCCCC1c2ccccc2", "C1CCCCC1C(C)(C)C", "C1CCCCC1C(C)(C)CC", "C1CCCCC1C(C)(C)C",
+                        "CC(=O)OC1CCCCC1", "CC(=O)OC1CCCCC1C", "C1CCCCC1c1ccccc1", "C1CCCCC1c1ccccc1C" };
+  g_autoptr (CwSmilesReader) reader = cw_smiles_reader_new (data->groups);
+
+  for (int round = 0; round < 2; round++)
+    for (guint i = 0; i < G_N_ELEMENTS (seq); i++)
+      {
+        g_autoptr (GError) e1 = NULL;
+        g_autoptr (GError) e2 = NULL;
+        g_autoptr (GPtrArray) fresh = cw_smiles_read (seq[i], data->groups, NULL, &e1);
+        CwMolecule mols[8];
+        int        n = cw_smiles_reader_read (reader, seq[i], -1, mols, 8, NULL, NULL, &e2);
+
+        if (fresh == NULL)
+          {
+            g_assert_cmpint (n, ==, -1);
+            g_assert_cmpint (e1->code, ==, e2->code);
+            continue;
+          }
+        g_assert_cmpint (n, ==, (int) fresh->len);
+        for (int k = 0; k < n; k++)
+          {
+            g_autofree char *a = cw_molecule_dup_spec (fresh->pdata[k]);
+            g_autofree char *b = cw_molecule_dup_spec (&mols[k]);
+            g_assert_cmpstr (a, ==, b);
+          }
+      }
+}
+
 /* The batch's allocation-free configuration text is the molecule's own, for every face pattern
  * of a few constitutions. */
 static void
@@ -383,6 +418,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/smiles/reader-info", test_reader_info);
   g_test_add_func ("/core/smiles/configuration-text", test_configuration_text);
   g_test_add_func ("/core/smiles/garbage", test_garbage);
+  g_test_add_func ("/core/smiles/reader-history", test_reader_history);
   status = g_test_run ();
   cw_data_free (data);
   return status;
