@@ -45,9 +45,16 @@ cw_app_get_data (GError **error)
     return data;
   dir = g_getenv ("CHAIRWISE_DATADIR");
   if (dir != NULL && *dir != '\0')
-    data = cw_data_new_from_dir (dir, error);
-  else
-    data = load_from_resources (error);
+    {
+      g_autoptr (GError) local = NULL;
+
+      data = cw_data_new_from_dir (dir, &local);
+      if (data != NULL)
+        return data;
+      /* Bad tables in CHAIRWISE_DATADIR must not stop the program: say so, use the built-in ones. */
+      g_printerr ("chairwise: CHAIRWISE_DATADIR=%s: %s; using the built-in tables\n", dir, local->message);
+    }
+  data = load_from_resources (error);
   return data;
 }
 

@@ -17,6 +17,7 @@ struct _CwApplication
   char          *screenshot_path; /* --screenshot FILE */
   gboolean       demo;            /* --demo */
   gint64         start_time;
+  int            status; /* exit status of a --screenshot run */
   gulong         after_paint_id;
   GdkFrameClock *clock;
 };
@@ -54,6 +55,7 @@ take_screenshot_cb (gpointer user_data)
   if (win == NULL || !cw_window_save_screenshot (CW_WINDOW (win), self->screenshot_path, &error))
     {
       g_printerr ("%s: %s\n", _("No screenshot"), error ? error->message : _("no window"));
+      self->status = 1;
       g_application_quit (G_APPLICATION (self));
       return G_SOURCE_REMOVE;
     }
@@ -334,7 +336,10 @@ cw_application_open (GApplication *app,
           g_autofree char *primary = g_strdup_printf (_("Could not open “%s”"), name);
 
           if (self->screenshot_path != NULL)
-            g_printerr ("%s: %s\n", primary, error->message);
+            {
+              g_printerr ("%s: %s\n", primary, error->message);
+              self->status = 1;
+            }
           cw_window_show_error (win, primary, error);
         }
       gtk_window_present (GTK_WINDOW (win));
@@ -373,6 +378,13 @@ cw_application_init (CwApplication *self)
   g_application_set_option_context_parameter_string (G_APPLICATION (self), _("[DOCUMENT…]"));
   g_application_set_option_context_summary (G_APPLICATION (self),
                                             _("Estimate which chair a substituted cyclohexane prefers."));
+}
+
+int
+cw_application_get_status (CwApplication *self)
+{
+  g_return_val_if_fail (CW_IS_APPLICATION (self), 1);
+  return self->status;
 }
 
 CwApplication *

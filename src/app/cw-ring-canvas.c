@@ -11,6 +11,7 @@ struct _CwRingCanvas
 
   /* owned: a copy, so the canvas never points into a document that changed */
   CwMolecule *mol;
+  GHashTable *layouts; /* markup → PangoLayout: shaping the text is most of a redraw */
   int         selected;
 };
 
@@ -113,28 +114,37 @@ draw_wedge (cairo_t *cr,
   cairo_stroke (cr);
 }
 
-static void
-draw_label (GtkWidget  *widget,
-            cairo_t    *cr,
-            const char *markup,
-            double      x,
-            double      y,
-            gboolean    bold)
+static PangoLayout *
+get_layout (CwRingCanvas *self,
+            const char   *markup,
+            gboolean      bold)
 {
-  PangoLayout *layout = gtk_widget_create_pango_layout (widget, NULL);
+  g_autofree char *key = bold ? g_strdup_printf ("<b>%s</b>", markup) : g_strdup (markup);
+  PangoLayout     *layout = g_hash_table_lookup (self->layouts, key);
+
+  if (layout == NULL)
+    {
+      layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), NULL);
+      pango_layout_set_markup (layout, key, -1);
+      g_hash_table_insert (self->layouts, g_steal_pointer (&key), layout);
+    }
+  return layout;
+}
+
+static void
+draw_label (CwRingCanvas *self,
+            cairo_t      *cr,
+            const char   *markup,
+            double        x,
+            double        y,
+            gboolean      bold)
+{
+  PangoLayout *layout = get_layout (self, markup, bold);
   int          w, h;
 
-  if (bold)
-    {
-      g_autofree char *m = g_strdup_printf ("<b>%s</b>", markup);
-      pango_layout_set_markup (layout, m, -1);
-    }
-  else
-    pango_layout_set_markup (layout, markup, -1);
   pango_layout_get_pixel_size (layout, &w, &h);
   cairo_move_to (cr, x - w / 2.0, y - h / 2.0);
   pango_cairo_show_layout (cr, layout);
-  g_object_unref (layout);
 }
 
 static void
@@ -164,7 +174,7 @@ draw_substituents (CwRingCanvas   *self,
       lx = x0 + g->r * 0.70 * cos (a);
       ly = y0 + g->r * 0.70 * sin (a);
       draw_wedge (cr, x0, y0, x1, y1, s->face == CW_FACE_DOWN);
-      draw_label (GTK_WIDGET (self), cr, s->group->markup ? s->group->markup : s->group->label, lx, ly, FALSE);
+      draw_label (self, cr, s->group->markup ? s->group->markup : s->group->label, lx, ly, FALSE);
     }
 }
 
@@ -220,7 +230,7 @@ cw_ring_canvas_snapshot (GtkWidget   *widget,
       /* Position numbers sit just inside the ring. */
       cairo_save (cr);
       cairo_set_source_rgba (cr, fg.red, fg.green, fg.blue, p == self->selected ? 1.0 : 0.6);
-      draw_label (widget, cr, num, x - 0.2 * g.r * cos (a), y - 0.2 * g.r * sin (a), p == self->selected);
+      draw_label (self, cr, num, x - 0.2 * g.r * cos (a), y - 0.2 * g.r * sin (a), p == self->selected);
       cairo_restore (cr);
       if (self->mol != NULL)
         draw_substituents (self, cr, &g, p);
@@ -303,6 +313,7 @@ cw_ring_canvas_finalize (GObject *object)
   CwRingCanvas *self = CW_RING_CANVAS (object);
 
   g_clear_pointer (&self->mol, cw_molecule_free);
+  g_clear_pointer (&self->layouts, g_hash_table_unref);
 
   G_OBJECT_CLASS (cw_ring_canvas_parent_class)->finalize (object);
 }
@@ -344,6 +355,18 @@ cw_ring_canvas_set_property (GObject      *object,
 }
 
 static void
+cw_ring_canvas_css_changed (GtkWidget         *widget,
+                            GtkCssStyleChange *change)
+{
+  CwRingCanvas *self = CW_RING_CANVAS (widget);
+
+  GTK_WIDGET_CLASS (cw_ring_canvas_parent_class)->css_changed (widget, change);
+  /* A new font or scale: lay the labels out again. */
+  g_hash_table_remove_all (self->layouts);
+  gtk_widget_queue_draw (widget);
+}
+
+static void
 cw_ring_canvas_measure (GtkWidget     *widget,
                         GtkOrientation orientation,
                         int            for_size,
@@ -367,6 +390,7 @@ cw_ring_canvas_class_init (CwRingCanvasClass *klass)
   object_class->set_property = cw_ring_canvas_set_property;
   widget_class->snapshot = cw_ring_canvas_snapshot;
   widget_class->measure = cw_ring_canvas_measure;
+  widget_class->css_changed = cw_ring_canvas_css_changed;
 
   properties[PROP_SELECTED] =
     g_param_spec_int ("selected", NULL, NULL, 1, CW_RING_SIZE, 1,
@@ -398,6 +422,7 @@ cw_ring_canvas_init (CwRingCanvas *self)
   GtkEventController *keys = gtk_event_controller_key_new ();
 
   self->selected = 1;
+  self->layouts = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_object_unref);
   gtk_widget_set_focusable (GTK_WIDGET (self), TRUE);
   gtk_widget_set_focus_on_click (GTK_WIDGET (self), TRUE);
   gtk_widget_add_css_class (GTK_WIDGET (self), "cw-ring-canvas");

@@ -108,6 +108,23 @@ gboolean cw_window_set_smiles (CwWindow   *self,
                                const char *smiles,
                                GError    **error);
 
+/* cw-window-draw.c: the figures on screen (through the render layer). */
+void cw_window_draw_chairs_cb (GtkDrawingArea *area,
+                               cairo_t        *cr,
+                               int             width,
+                               int             height,
+                               gpointer        user_data);
+void cw_window_draw_profile_cb (GtkDrawingArea *area,
+                                cairo_t        *cr,
+                                int             width,
+                                int             height,
+                                gpointer        user_data);
+void cw_window_draw_scan_cb (GtkDrawingArea *area,
+                             cairo_t        *cr,
+                             int             width,
+                             int             height,
+                             gpointer        user_data);
+
 /* cw-window-results.c: the labels, terms table and flags for the current analysis. */
 void cw_window_update_results (CwWindow *self);
 

@@ -24,86 +24,6 @@ cw_window_get_temperature_unit (CwWindow *self)
   return g_settings_get_enum (self->settings, "temperature-unit") == 1 ? CW_TUNIT_CELSIUS : CW_TUNIT_KELVIN;
 }
 
-/* The window follows the theme: light text on the background means a dark style. */
-static gboolean
-widget_is_dark (GtkWidget *widget)
-{
-  GdkRGBA fg;
-
-  G_GNUC_BEGIN_IGNORE_DEPRECATIONS
-  gtk_style_context_get_color (gtk_widget_get_style_context (widget), &fg);
-  G_GNUC_END_IGNORE_DEPRECATIONS
-  return 0.2126 * fg.red + 0.7152 * fg.green + 0.0722 * fg.blue > 0.5;
-}
-
-void
-cw_window_render_options (CwWindow        *self,
-                          GtkWidget       *widget,
-                          CwRenderOptions *opt)
-{
-  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  int               sel = cw_ring_canvas_get_selected (self->ring_canvas);
-
-  cw_render_options_init (opt);
-  opt->unit = cw_window_get_energy_unit (self);
-  opt->temperature_unit = cw_window_get_temperature_unit (self);
-  opt->dark = widget != NULL && widget_is_dark (widget);
-  opt->highlight_sub = -1;
-  for (int i = 0; i < mol->n_subs; i++)
-    if (mol->subs[i].position == sel)
-      {
-        opt->highlight_sub = i;
-        break;
-      }
-}
-
-static void
-draw_figure (CwWindow       *self,
-             GtkDrawingArea *area,
-             CwFigure        fig,
-             cairo_t        *cr,
-             int             width,
-             int             height)
-{
-  CwRenderOptions opt;
-
-  if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
-    return;
-  cw_window_render_options (self, GTK_WIDGET (area), &opt);
-  cw_render_figure (cr, fig, self->data, cw_document_peek_molecule (self->doc),
-                    self->an_valid ? &self->an : NULL, &opt, width, height);
-}
-
-static void
-draw_chairs_cb (GtkDrawingArea *area,
-                cairo_t        *cr,
-                int             width,
-                int             height,
-                gpointer        user_data)
-{
-  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_CHAIRS, cr, width, height);
-}
-
-static void
-draw_profile_cb (GtkDrawingArea *area,
-                 cairo_t        *cr,
-                 int             width,
-                 int             height,
-                 gpointer        user_data)
-{
-  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_PROFILE, cr, width, height);
-}
-
-static void
-draw_scan_cb (GtkDrawingArea *area,
-              cairo_t        *cr,
-              int             width,
-              int             height,
-              gpointer        user_data)
-{
-  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_SCAN, cr, width, height);
-}
-
 /* ---- refresh after every change ----------------------------------------------------- */
 
 static void
@@ -378,6 +298,8 @@ show_help_overlay_action (GtkWidget  *widget,
   GtkWindow *shortcuts = GTK_WINDOW (gtk_builder_get_object (builder, "shortcuts_window"));
 
   gtk_window_set_transient_for (shortcuts, GTK_WINDOW (widget));
+  /* Shortcuts named by action show the accelerators the application set for them. */
+  gtk_window_set_application (shortcuts, gtk_window_get_application (GTK_WINDOW (widget)));
   gtk_window_set_destroy_with_parent (shortcuts, TRUE);
   gtk_window_present (shortcuts);
 }
@@ -550,9 +472,9 @@ cw_window_init (CwWindow *self)
   g_signal_connect_object (self->ring_canvas, "choose-requested", G_CALLBACK (ring_choose_requested_cb), self,
                            G_CONNECT_SWAPPED);
 
-  gtk_drawing_area_set_draw_func (self->chairs_area, draw_chairs_cb, self, NULL);
-  gtk_drawing_area_set_draw_func (self->profile_area, draw_profile_cb, self, NULL);
-  gtk_drawing_area_set_draw_func (self->scan_area, draw_scan_cb, self, NULL);
+  gtk_drawing_area_set_draw_func (self->chairs_area, cw_window_draw_chairs_cb, self, NULL);
+  gtk_drawing_area_set_draw_func (self->profile_area, cw_window_draw_profile_cb, self, NULL);
+  gtk_drawing_area_set_draw_func (self->scan_area, cw_window_draw_scan_cb, self, NULL);
   gtk_label_set_text (self->caution_label, cw_caution_text ());
 
   cw_window_file_init (self);
@@ -627,40 +549,4 @@ cw_window_is_pristine (CwWindow *self)
   g_return_val_if_fail (CW_IS_WINDOW (self), FALSE);
   return self->file == NULL && !cw_window_get_modified (self) &&
          cw_document_peek_molecule (self->doc)->n_subs == 0;
-}
-
-gboolean
-cw_window_save_screenshot (CwWindow   *self,
-                           const char *path,
-                           GError    **error)
-{
-  GtkWidget *widget = GTK_WIDGET (self);
-  int        w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
-  g_autoptr (GdkPaintable) paintable = NULL;
-  g_autoptr (GskRenderNode) node = NULL;
-  g_autoptr (GdkTexture) texture = NULL;
-  GtkSnapshot *snapshot;
-
-  if (w <= 0 || h <= 0 || gtk_native_get_renderer (GTK_NATIVE (self)) == NULL)
-    {
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window is not shown yet"));
-      return FALSE;
-    }
-  paintable = gtk_widget_paintable_new (widget);
-  snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
-  node = gtk_snapshot_free_to_node (snapshot);
-  if (node == NULL)
-    {
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window drew nothing"));
-      return FALSE;
-    }
-  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (self)), node,
-                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
-  if (!gdk_texture_save_to_png (texture, path))
-    {
-      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("Could not write “%s”"), path);
-      return FALSE;
-    }
-  return TRUE;
 }

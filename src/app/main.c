@@ -46,6 +46,9 @@ main (int   argc,
   bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
   textdomain (GETTEXT_PACKAGE);
 
+  int status;
+
   app = cw_application_new ();
-  return g_application_run (G_APPLICATION (app), argc, argv);
+  status = g_application_run (G_APPLICATION (app), argc, argv);
+  return status != 0 ? status : cw_application_get_status (app);
 }

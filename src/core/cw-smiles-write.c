@@ -50,19 +50,25 @@ typedef struct
   GString         *out;
 } Ctx;
 
-static void
+/* Appends the group written from (or, reverse, towards) its attachment atom; FALSE when it has
+ * no string written towards it (nothing appended). */
+static gboolean
 append_group (Ctx *c, const CwGroup *g, gboolean reverse)
 {
-  char    *fwd, *rev;
-  gboolean owned;
+  char       *fwd, *rev;
+  gboolean    owned;
+  const char *text;
 
   cw_sm_group_strings (g, c->index, &fwd, &rev, &owned);
-  g_string_append (c->out, reverse ? rev : fwd);
+  text = reverse ? rev : fwd;
+  if (text)
+    g_string_append (c->out, text);
   if (owned)
     {
       g_free (fwd);
       g_free (rev);
     }
+  return text != NULL;
 }
 
 static void
@@ -73,10 +79,9 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
   int            h = f == UP ? DOWN : UP;
   const CwGroup *first = slot[0] != NULL ? slot[0] : slot[1];
 
-  if (p == 1)
+  if (p == 1 && append_group (c, first, TRUE))
     {
       int w1[4] = { f, h, PREV, NEXT }, w2[4] = { UP, PREV, DOWN, NEXT };
-      append_group (c, first, TRUE);
       g_string_append (c->out, ring_token (marked, n, n == 2 ? w2 : w1));
       g_string_append_c (c->out, '1');
       if (n == 2)
@@ -85,6 +90,22 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
           append_group (c, slot[1], FALSE);
           g_string_append_c (c->out, ')');
         }
+      return;
+    }
+  if (p == 1)
+    {
+      /* the group cannot be written towards the ring: the ring carbon comes first, its implicit
+       * H (if any) first in its neighbour order, then ring bond 1, then the groups */
+      int w1[4] = { h, PREV, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
+      g_string_append (c->out, ring_token (marked, n, n == 2 ? w2 : w1));
+      g_string_append_c (c->out, '1');
+      for (int k = 0; k < 2; k++)
+        if (slot[k] != NULL)
+          {
+            g_string_append_c (c->out, '(');
+            append_group (c, slot[k], FALSE);
+            g_string_append_c (c->out, ')');
+          }
       return;
     }
   if (p < CW_RING_SIZE)

@@ -47,17 +47,49 @@ fragment_hash (CwSmGraph *g, guint8 *mask)
   return cw_sm_fragment_hash (g, 0, mask, 1);
 }
 
+/* Does "C" + text (or text + "C" when reverse) hold the rooted fragment of hash `want`, bonded to
+ * that extra carbon by its root? Checks the writer's strings before they are used. */
+static gboolean
+fragment_string_ok (const char *text, gboolean reverse, guint64 want)
+{
+  g_autofree CwSmGraph *g = g_new (CwSmGraph, 1);
+  g_autofree char      *full = reverse ? g_strconcat (text, "C", NULL) : g_strconcat ("C", text, NULL);
+  guint8                mask[CW_SM_MAX_ATOMS];
+  int                   extra, root;
+
+  g->frag_cache = NULL;
+  if (!cw_sm_parse (g, full, strlen (full), FALSE, NULL) || g->n_dots > 0)
+    return FALSE;
+  cw_sm_perceive_aromatic_rings (g);
+  extra = reverse ? g->n_atoms - 1 : 0;
+  if (g->atoms[extra].degree != 1)
+    return FALSE;
+  root = g->atoms[extra].nb[0];
+  memset (mask, 1, g->n_atoms);
+  mask[extra] = 0;
+  return cw_sm_fragment_hash (g, root, mask, 1) == want;
+}
+
+/* The fragment written from its root (fwd) and towards it (rev), ring digits from first_digit.
+ * A string that does not read back as the fragment is dropped (NULL): the writer then puts the
+ * ring carbon first. */
 static void
 fragment_strings (CwSmGraph *g, guint8 *mask, int first_digit, char **fwd, char **rev)
 {
   GString *s = g_string_new (NULL);
+  guint64  want;
 
   memset (mask, 1, g->n_atoms);
+  want = cw_sm_fragment_hash (g, 0, mask, 1);
   cw_sm_fragment_write (g, 0, mask, 1, FALSE, first_digit, s);
   *fwd = g_strdup (s->str);
   g_string_truncate (s, 0);
   cw_sm_fragment_write (g, 0, mask, 1, TRUE, first_digit, s);
   *rev = g_string_free (s, FALSE);
+  if (!fragment_string_ok (*fwd, FALSE, want))
+    g_clear_pointer (fwd, g_free);
+  if (!fragment_string_ok (*rev, TRUE, want))
+    g_clear_pointer (rev, g_free);
 }
 
 CwSmIndex *
@@ -89,6 +121,8 @@ cw_sm_index_new (const CwGroupTable *table)
           continue;
         }
       fragment_strings (g, mask, 2, &index->fwd[i], &index->rev[i]);
+      if (index->fwd[i] == NULL)
+        g_string_append_printf (index->problems, _("group “%s”: its fragment cannot be written back\n"), group->id);
       h = fragment_hash (g, mask);
       for (slot = h & (CW_SM_INDEX_SLOTS - 1); index->slot_group[slot] >= 0; slot = (slot + 1) & (CW_SM_INDEX_SLOTS - 1))
         if (index->slot_hash[slot] == h)
@@ -148,15 +182,19 @@ cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index, char **fwd, c
       return;
     }
   *owned = TRUE;
+  *fwd = *rev = NULL;
   g = g_new (CwSmGraph, 1);
+  g->frag_cache = NULL;
   if (parse_fragment (g, group->smiles, NULL))
     fragment_strings (g, mask, 2, fwd, rev);
-  else
+  g_free (g);
+  if (*fwd == NULL)
     {
+      /* no usable fragment: a wildcard atom stands for the group */
+      g_free (*rev);
       *fwd = g_strdup ("*");
       *rev = g_strdup ("*");
     }
-  g_free (g);
 }
 
 /* ---- the reader ---- */

@@ -240,6 +240,15 @@ sub_markup (const CwMolecule *mol, int sub)
   return g_strdup_printf (_("%s on C%d"), mol->subs[sub].group->markup, mol->subs[sub].position);
 }
 
+/* "both chairs", "chair 1" or "chair 2" for a per-chair flag pair with at least one set. */
+static const char *
+chairs_word (const gboolean ok[2])
+{
+  if (ok[0] && ok[1])
+    return _("both chairs");
+  return ok[0] ? _("chair 1") : _("chair 2");
+}
+
 static void
 append_chair (GString *s, const CwLeavingGroup *lg, int ch)
 {
@@ -247,32 +256,38 @@ append_chair (GString *s, const CwLeavingGroup *lg, int ch)
   if (lg->n_anti[ch] == 0)
     g_string_append (s, _("no anti-periplanar β-H"));
   for (int i = 0; i < lg->n_anti[ch] && i < 2; i++)
-    g_string_append_printf (s, _("%s%s-%d %s"), i == 0 ? _("anti-periplanar β-H: ") : ", ",
-                                                             lg->anti[ch][i].deuterium ? "D" : "H", lg->anti[ch][i].position,
-                                                             lg->anti[ch][i].face == CW_FACE_UP ? _("up") : _("down"));
+    {
+      const CwAntiHydrogen *h = &lg->anti[ch][i];
+      const char           *face = h->face == CW_FACE_UP ? _("up") : _("down");
+
+      g_string_append (s, i == 0 ? _("anti-periplanar β-H: ") : ", ");
+      g_string_append_printf (s, "%s-%d %s", h->deuterium ? "D" : "H", h->position, face);
+    }
 }
 
 static void
 append_alkenes (GString *s, const CwLeavingGroup *lg, const CwMolecule *mol)
 {
+  int least = G_MAXINT;
+
   if (lg->n_alkenes == 0)
     {
-      g_string_append (s, lg->exo_anti ? "" : _(" · no E2 alkene by the anti pathway"));
+      g_string_append (s, _(" · no E2 alkene by the anti pathway"));
       return;
     }
+  for (int k = 0; k < lg->n_alkenes; k++)
+    least = MIN (least, lg->alkenes[k].substitution);
   g_string_append (s, lg->n_alkenes > 1 ? _(" · E2 alkenes: ") : _(" · E2 alkene: "));
   for (int k = 0; k < lg->n_alkenes; k++)
     {
       const CwAlkene  *al = &lg->alkenes[k];
       g_autofree char *label = cw_alkene_dup_label (al, mol);
       g_autofree char *esc = g_markup_escape_text (label, -1);
-      const char      *from = al->chair_ok[0] && al->chair_ok[1] ? _("both chairs")
-                                                                 : al->chair_ok[0]
-        ? _("chair 1")
-        : _("chair 2");
+      /* "the more substituted" only where some other alkene is less so (not for a tie). */
+      gboolean more = al->most_substituted && al->substitution > least;
 
-      g_string_append_printf (s, "%s%s%s%s, %s %s", k ? "; " : "", al->most_substituted && lg->n_alkenes > 1 ? "<b>" : "",
-                              esc, al->most_substituted && lg->n_alkenes > 1 ? _(", the more substituted</b>") : "", _("from"), from);
+      g_string_append_printf (s, "%s%s%s%s, %s %s", k ? "; " : "", more ? "<b>" : "", esc,
+                              more ? _(", the more substituted</b>") : "", _("from"), chairs_word (al->chair_ok));
     }
 }
 
@@ -320,12 +335,7 @@ anti_pair (CwReport *r, const CwMolecule *mol, const CwAntiPair *p, double y)
   g_autofree char *where = NULL, *m = NULL;
 
   if (p->anti[0] || p->anti[1])
-    where = g_strdup_printf (_("anti-periplanar in %s (%s %% of molecules)"),
-                                p->anti[0] && p->anti[1] ? _("both chairs")
-                                                         : p->anti[0]
-                                ? _("chair 1")
-                                : _("chair 2"),
-                                     frac);
+    where = g_strdup_printf (_("anti-periplanar in %s (%s %% of molecules)"), chairs_word (p->anti), frac);
   else
     where = g_strdup (_("anti-periplanar in neither chair"));
   m = g_strdup_printf ("<b>%s / %s</b> (%s): %s", a, b, pair_role (p->role), where);

@@ -367,9 +367,9 @@ report_end (Report *r)
  * the figures less than FIGURE_ROOM it is set smaller, down to BODY_MIN, and then the figures
  * take what is left (the profile and scan row goes first when even that is too little). */
 static double
-fit_page (const Sections *sec, double width, double height, CwTemperatureUnit tunit, Rows *rows, double *room_out)
+fit_page (const Sections *sec, double width, double height, double body, CwTemperatureUnit tunit, Rows *rows, double *room_out)
 {
-  double body = BODY, room = 0;
+  double room = 0;
 
   for (;; body -= 0.25)
     {
@@ -382,12 +382,12 @@ fit_page (const Sections *sec, double width, double height, CwTemperatureUnit tu
       if (room >= FIGURE_ROOM || body <= BODY_MIN)
         break;
     }
-  rows->row1 = MIN (190, MAX (0, room) * 0.55);
-  rows->row2 = MIN (165, MAX (0, room) - rows->row1);
+  rows->row1 = MIN (210, MAX (0, room) * 0.55);
+  rows->row2 = MIN (185, MAX (0, room) - rows->row1);
   if (rows->row2 < 60)
     {
       rows->row2 = 0;
-      rows->row1 = MIN (190, MAX (0, room));
+      rows->row1 = MIN (210, MAX (0, room));
     }
   *room_out = room;
   return body;
@@ -434,13 +434,13 @@ cw_render_report_with_geometry (cairo_t *cr, const CwData *data, const CwGeometr
   compute_sections (&sec, gd, c, re, &ce, &rerr);
   sec.couplings_error = ce ? ce->message : NULL;
   sec.reactivity_error = rerr ? rerr->message : NULL;
-  body = fit_page (&sec, width, height, tunit, &rows, &room);
+  body = fit_page (&sec, width, height, BODY, tunit, &rows, &room);
   /* A molecule with very many terms and warnings: lay the page out larger and scale it down, so
    * it still fits one page. */
   while (room < FIGURE_MIN && f > 0.5)
     {
       f -= 0.05;
-      body = fit_page (&sec, width / f, height / f, tunit, &rows, &room);
+      body = fit_page (&sec, width / f, height / f, BODY_MIN, tunit, &rows, &room);
     }
   report_begin (&r, width / f, height / f, body, tunit);
   build_page (&r, &sec, &rows);

@@ -212,6 +212,29 @@ test_isomers_page (void)
   destroy_window (win);
 }
 
+static void
+test_shortcuts_window (void)
+{
+  CwWindow   *win = new_window ();
+  GListModel *toplevels = gtk_window_get_toplevels (); /* borrowed */
+  GtkWidget  *shortcuts = NULL;
+
+  /* Built on first use; it must come up without a warning (fatal in tests). */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.show-help-overlay", NULL);
+  app_test_pump (200, NULL);
+  for (guint i = 0; i < g_list_model_get_n_items (toplevels); i++)
+    {
+      g_autoptr (GObject) w = g_list_model_get_item (toplevels, i);
+
+      if (GTK_IS_SHORTCUTS_WINDOW (w))
+        shortcuts = GTK_WIDGET (w);
+    }
+  g_assert_nonnull (shortcuts);
+  g_assert_true (gtk_widget_get_visible (shortcuts));
+  gtk_window_destroy (GTK_WINDOW (shortcuts));
+  destroy_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -222,5 +245,6 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/pages/couplings", test_couplings_page);
   g_test_add_func ("/app/pages/reactions", test_reactions_page);
   g_test_add_func ("/app/pages/isomers", test_isomers_page);
+  g_test_add_func ("/app/pages/shortcuts-window", test_shortcuts_window);
   return g_test_run ();
 }

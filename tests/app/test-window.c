@@ -231,6 +231,8 @@ test_save_open_round_trip (void)
   {
     g_auto (GStrv) recent = g_settings_get_strv (other->settings, "recent-files");
     g_assert_cmpstr (recent[0], ==, path);
+    /* … and into the Open Recent menu. */
+    g_assert_cmpint (g_menu_model_get_n_items (G_MENU_MODEL (other->recent_section)), >=, 1);
   }
   destroy_window (other);
   destroy_window (win);

@@ -75,6 +75,12 @@ main (int argc, char *argv[])
   CwWindow          *win;
   guint              tick;
 
+  /* Autosave files of this run go to a private directory. */
+  {
+    g_autofree char *state = g_dir_make_tmp ("cw-bench-XXXXXX", NULL);
+
+    g_setenv ("XDG_STATE_HOME", state, TRUE);
+  }
   /* As the program does at start (src/app/main.c): Cairo renderer, no GL context. */
   if (g_getenv ("GDK_DEBUG") == NULL && g_strcmp0 (g_getenv ("GSK_RENDERER"), "cairo") == 0)
     g_setenv ("GDK_DEBUG", "gl-disable", TRUE);

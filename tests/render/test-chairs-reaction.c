@@ -27,6 +27,9 @@ static const Case cases[] = {
   { "1u=bromo 2d=bromo", { 2, 0 } },
   /* Both neighbours' axial slots carry methyls: no anti-periplanar β-H anywhere. */
   { "1u=chloro 2d=methyl 6d=methyl", { 0, 0 } },
+  /* A deuterium in the anti slot is marked like a hydrogen (an anti E2 would lose D); the
+   * tert-butyl group holds Cl axial. */
+  { "1u=chloro 2d=deuterio 4u=tert-butyl", { 2, 0 } },
   /* No leaving group at all. */
   { "1u=methyl 3u=methyl", { 0, 0 } },
 };
@@ -90,7 +93,7 @@ expected (const CwReactivity *re, int only_sub, int n_anti[2])
             const CwAtom3D *a = &re->geometry[ch].atoms[re->groups[g].anti[ch][j].atom];
             guint64         bit = G_GUINT64_CONSTANT (1) << (ch * 14 + a->position * 2 + a->axial);
 
-            g_assert_cmpint (a->kind, ==, CW_ATOM_HYDROGEN);
+            g_assert_cmpint (a->kind, ==, re->groups[g].anti[ch][j].deuterium ? CW_ATOM_SUBSTITUENT : CW_ATOM_HYDROGEN);
             g_assert_cmpint (a->position, ==, re->groups[g].anti[ch][j].position);
             /* Anti-periplanar in a chair means axial (trans-diaxial). */
             g_assert_true (a->axial);
@@ -180,7 +183,7 @@ test_marks (void)
         g_error ("%s: marked %" G_GINT64_MODIFIER "x, core says %" G_GINT64_MODIFIER "x", cases[c].spec, got, want);
       g_assert_cmpint (n_labels, ==, n_anti[0] + n_anti[1]);
       check_widths (lit, re, -1, want);
-      /* Every free ring slot gets its hydrogen bond in both chairs. */
+      /* Every free ring slot gets its hydrogen bond in both chairs (a D is a group). */
       {
         int h_bonds = 0;
 

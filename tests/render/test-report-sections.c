@@ -182,6 +182,8 @@ test_menthyl (void)
   assert_has (text, "E2 alkene: C2=C3 (disubstituted), from chair 1", "menthyl");
   assert_lacks (text, "C1=C2", "menthyl");
   assert_has (text, "⚠ Cl(2) is anti-periplanar to a β-hydrogen only in the minor chair", "menthyl");
+  /* The chairs figure carries the marks, with their legend. */
+  assert_has (text, "β-H anti-periplanar to it (E2)", "menthyl");
 }
 
 /* Neomenthyl chloride (Cl axial in the major chair): both β carbons offer an axial H, and the more
@@ -218,6 +220,20 @@ test_no_anti (void)
   assert_has (text, "no E2 alkene by the anti pathway", "no-anti");
 }
 
+/* A deuterium anti to the chloride (held axial by the tert-butyl group) is named as D; both
+ * alkenes are disubstituted, so neither is called the more substituted. */
+static void
+test_deuterium (void)
+{
+  g_autoptr (CwDocument) doc = ring_document ("1u=chloro 2d=deuterio 4u=tert-butyl");
+  g_autofree char *text = report_text (doc, "deuterium");
+
+  assert_has (text, "anti-periplanar β-H: H-6 down, D-2 down", "deuterium");
+  assert_has (text, "C1=C6 (disubstituted), from chair 1", "deuterium");
+  assert_has (text, "C1=C2 (disubstituted), from chair 1", "deuterium");
+  assert_lacks (text, "the more substituted", "deuterium");
+}
+
 /* A trans-vicinal bromide and methoxy group: anti-periplanar (diaxial) only in the chair with
  * both axial, the one the equatorial tert-butyl group holds (A-values, SCIENCE.md §3). */
 static void
@@ -242,6 +258,7 @@ test_no_leaving_group (void)
 
   assert_has (text, "No group in the molecule is marked as a leaving group.", "methyl");
   assert_lacks (text, "Notes.", "methyl");
+  assert_lacks (text, "β-H anti-periplanar to it (E2)", "methyl");
   assert_has (text_full, "No ring protons", "full");
   assert_has (text_full, caution, "full");
 }
@@ -320,6 +337,7 @@ main (int argc, char **argv)
   g_test_add_func ("/render/report-sections/menthyl", test_menthyl);
   g_test_add_func ("/render/report-sections/neomenthyl", test_neomenthyl);
   g_test_add_func ("/render/report-sections/no-anti", test_no_anti);
+  g_test_add_func ("/render/report-sections/deuterium", test_deuterium);
   g_test_add_func ("/render/report-sections/pairs", test_pairs);
   g_test_add_func ("/render/report-sections/no-leaving-group", test_no_leaving_group);
   g_test_add_func ("/render/report-sections/no-geometry", test_no_geometry);

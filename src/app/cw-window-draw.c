@@ -1,0 +1,123 @@
+#include "config.h"
+
+#include <glib/gi18n.h>
+
+#include "cw-window-private.h"
+
+/* Drawing the figures on screen, and the whole window into a PNG. */
+
+/* The window follows the theme: light text on the background means a dark style. */
+static gboolean
+widget_is_dark (GtkWidget *widget)
+{
+  GdkRGBA fg;
+
+  G_GNUC_BEGIN_IGNORE_DEPRECATIONS
+  gtk_style_context_get_color (gtk_widget_get_style_context (widget), &fg);
+  G_GNUC_END_IGNORE_DEPRECATIONS
+  return 0.2126 * fg.red + 0.7152 * fg.green + 0.0722 * fg.blue > 0.5;
+}
+
+void
+cw_window_render_options (CwWindow        *self,
+                          GtkWidget       *widget,
+                          CwRenderOptions *opt)
+{
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  int               sel = cw_ring_canvas_get_selected (self->ring_canvas);
+
+  cw_render_options_init (opt);
+  opt->unit = cw_window_get_energy_unit (self);
+  opt->temperature_unit = cw_window_get_temperature_unit (self);
+  opt->dark = widget != NULL && widget_is_dark (widget);
+  opt->highlight_sub = -1;
+  for (int i = 0; i < mol->n_subs; i++)
+    if (mol->subs[i].position == sel)
+      {
+        opt->highlight_sub = i;
+        break;
+      }
+}
+
+static void
+draw_figure (CwWindow       *self,
+             GtkDrawingArea *area,
+             CwFigure        fig,
+             cairo_t        *cr,
+             int             width,
+             int             height)
+{
+  CwRenderOptions opt;
+
+  if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
+    return;
+  cw_window_render_options (self, GTK_WIDGET (area), &opt);
+  cw_render_figure (cr, fig, self->data, cw_document_peek_molecule (self->doc),
+                    self->an_valid ? &self->an : NULL, &opt, width, height);
+}
+
+void
+cw_window_draw_chairs_cb (GtkDrawingArea *area,
+                          cairo_t        *cr,
+                          int             width,
+                          int             height,
+                          gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_CHAIRS, cr, width, height);
+}
+
+void
+cw_window_draw_profile_cb (GtkDrawingArea *area,
+                           cairo_t        *cr,
+                           int             width,
+                           int             height,
+                           gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_PROFILE, cr, width, height);
+}
+
+void
+cw_window_draw_scan_cb (GtkDrawingArea *area,
+                        cairo_t        *cr,
+                        int             width,
+                        int             height,
+                        gpointer        user_data)
+{
+  draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_SCAN, cr, width, height);
+}
+
+gboolean
+cw_window_save_screenshot (CwWindow   *self,
+                           const char *path,
+                           GError    **error)
+{
+  GtkWidget *widget = GTK_WIDGET (self);
+  int        w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  g_autoptr (GdkPaintable) paintable = NULL;
+  g_autoptr (GskRenderNode) node = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  GtkSnapshot *snapshot;
+
+  if (w <= 0 || h <= 0 || gtk_native_get_renderer (GTK_NATIVE (self)) == NULL)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window is not shown yet"));
+      return FALSE;
+    }
+  paintable = gtk_widget_paintable_new (widget);
+  snapshot = gtk_snapshot_new ();
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  if (node == NULL)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window drew nothing"));
+      return FALSE;
+    }
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (self)), node,
+                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+  if (!gdk_texture_save_to_png (texture, path))
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("Could not write “%s”"), path);
+      return FALSE;
+    }
+  return TRUE;
+}
