@@ -114,9 +114,11 @@ cw_window_place_custom_group (CwWindow   *self,
   g = cw_molecule_add_custom_group (mol, cw_group_new_custom (id, stripped, a_kcal, sigma_kcal, source));
   if (!cw_molecule_set (mol, position, face, g, error))
     {
-      /* Put the document back exactly as it was. */
+      /* Put the document back exactly as it was; the chooser rows pointed into the old one. */
       g_clear_pointer (&self->doc, cw_document_free);
       self->doc = g_steal_pointer (&before);
+      self->n_custom_shown = G_MAXUINT;
+      cw_window_refresh (self);
       return FALSE;
     }
   cw_history_push (self->history, before, self->serial, NULL);

@@ -43,6 +43,9 @@ update_groups_store (CwWindow *self)
   g_list_store_splice (self->groups_store, 0, g_list_model_get_n_items (G_LIST_MODEL (self->groups_store)),
                        items->pdata, items->len);
   self->n_custom_shown = n_custom;
+  /* The slot buttons may show a custom group that has just been replaced. */
+  cw_group_chooser_set_energy_unit (self->up_chooser, cw_window_get_energy_unit (self));
+  cw_group_chooser_set_energy_unit (self->down_chooser, cw_window_get_energy_unit (self));
 }
 
 static void
