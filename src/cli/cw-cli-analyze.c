@@ -36,25 +36,12 @@ print_chair_text (const CwMolecule *mol, const CwAnalysis *an, int c, CwEnergyUn
     }
 }
 
-static char *
-percent (double x)
-{
-  double p = 100 * x;
-
-  if (p >= 0.1 && p <= 99.9)
-    return g_strdup_printf ("%.1f", p);
-  if (p < 0.1)
-    return g_strdup_printf ("%.2g", p);
-  /* enough decimals to show how far from 100 % it is */
-  return g_strdup_printf ("%.*f", MIN (12, 1 - (int) floor (log10 (MAX (100 - p, 1e-12))) + 1), p);
-}
-
 static void
 print_population (int c, const CwAnalysis *an)
 {
-  g_autofree char *p = percent (an->pop[c]);
-  g_autofree char *lo = percent (an->pop_low[c]);
-  g_autofree char *hi = percent (an->pop_high[c]);
+  g_autofree char *p = cw_cli_format_percent (an->pop[c]);
+  g_autofree char *lo = cw_cli_format_percent (an->pop_low[c]);
+  g_autofree char *hi = cw_cli_format_percent (an->pop_high[c]);
 
   printf (_("Chair %d: %s %% (%s to %s %% for ΔG° ± 2σ)\n"), c + 1, p, lo, hi);
 }

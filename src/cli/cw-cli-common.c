@@ -1,6 +1,7 @@
 #include "config.h"
 
 #include <glib/gi18n.h>
+#include <math.h>
 #include <stdarg.h>
 #include <stdio.h>
 
@@ -221,4 +222,19 @@ cw_cli_input_load (CwCliInput *input, const char *path, CwData **data_out, int *
                        "the first, %s (see “chairwise-calc isomers” for all)\n"),
              cmd, docs->len, cw_document_get_title (g_ptr_array_index (docs, 0)));
   return g_ptr_array_steal_index (docs, 0);
+}
+
+char *
+cw_cli_format_percent (double x)
+{
+  double p = 100 * x;
+
+  if (p >= 0.1 && p <= 99.9)
+    return g_strdup_printf ("%.1f", p);
+  if (p < 0.1)
+    return g_strdup_printf ("%.2g", p); /* a minor chair still shows two figures */
+  if (100 - p < 1e-9)
+    return g_strdup ("100");
+  /* enough decimals to show how far from 100 % it is */
+  return g_strdup_printf ("%.*f", MIN (10, 1 - (int) floor (log10 (100 - p)) + 1), p);
 }

@@ -52,14 +52,7 @@ cw_cli_nmr_clear (CwCliNmrContext *ctx)
 char *
 cw_cli_nmr_percent (double x)
 {
-  double p = 100 * x;
-
-  /* small fractions matter here (a minor reactive chair): keep two significant figures */
-  if (p >= 0.1 && p <= 99.9)
-    return g_strdup_printf ("%.1f", p);
-  if (p < 0.1)
-    return g_strdup_printf ("%.2g", p);
-  return g_strdup_printf ("%.*f", MIN (12, 1 - (int) floor (log10 (MAX (100 - p, 1e-12))) + 1), p);
+  return cw_cli_format_percent (x);
 }
 
 void

@@ -46,6 +46,8 @@ CwDocument *cw_cli_input_load (CwCliInput *input, const char *path, CwData **dat
  * (element-type CwDocument*, owned); each isomer's title is its canonical SMILES. */
 GPtrArray  *cw_cli_input_load_all (CwCliInput *input, const char *path, CwData **data_out, int *exit_code);
 int         cw_cli_error (const char *command, int code, const char *format, ...) G_GNUC_PRINTF (3, 4);
+/* A fraction as a percentage with as many figures as it needs: "68.3", "0.031", "99.9704". */
+char       *cw_cli_format_percent (double fraction);
 int         cw_cli_usage_error (GOptionContext *context, const char *command, const char *message);
 
 /* Subcommands; each lives in its own cw-cli-*.c file. */

@@ -114,6 +114,10 @@ add_exo_alkene (const CwMolecule *mol, CwReactivity *r, CwLeavingGroup *lg, cons
 
   if (gem == NULL || gem->group->first_atom != CW_EL_C)
     return;
+  /* Only an sp3 first carbon gives an exocyclic alkene; a vinyl or formyl C–H would make an
+   * allene or a ketene. */
+  if (gem->group->klass == CW_CLASS_UNSATURATED || gem->group->klass == CW_CLASS_ARYL)
+    return;
   cw_fragment_info (gem->group, &info);
   if (!info.from_smiles || info.n_hydrogens == 0 || lg->n_alkenes >= CW_MAX_ALKENES)
     return;

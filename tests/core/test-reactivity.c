@@ -189,6 +189,15 @@ test_exocyclic_and_none (void)
   g_assert_true (r.groups[0].anti[0][0].deuterium != r.groups[0].anti[0][1].deuterium);
   g_assert_nonnull (find_alkene (&r.groups[0], 1, 2));
 
+  /* a geminal vinyl or formyl C–H is sp2: losing it would make an allene or a ketene, not an
+   * E2 alkene (common practice, no source) */
+  compute ("1u=iodo 1d=vinyl", 298.15, &r, &an);
+  for (int i = 0; i < r.groups[0].n_alkenes; i++)
+    g_assert_cmpint (r.groups[0].alkenes[i].position_b, !=, 0);
+  compute ("1u=bromo 1d=formyl", 298.15, &r, &an);
+  for (int i = 0; i < r.groups[0].n_alkenes; i++)
+    g_assert_cmpint (r.groups[0].alkenes[i].position_b, !=, 0);
+
   compute ("1u=methyl", 298.15, &r, &an);
   g_assert_cmpint (r.n_groups, ==, 0);
   g_assert_true (has_warning (&r, CW_REACT_NO_LEAVING_GROUP));
