@@ -28,13 +28,16 @@ cw_cli_draw (int argc, char **argv)
   g_auto (CwCliInput) input = { 0 };
   g_autofree char *figure = NULL, *output = NULL;
   double           dpi = 300;
-  gboolean         hydrogens = FALSE;
+  gboolean         hydrogens = FALSE, anti = FALSE;
   GOptionEntry     entries[] = {
-        { "figure", 'f', 0, G_OPTION_ARG_STRING, &figure, N_("structure, chairs, profile or scan"), "FIGURE" },
-          { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write to FILE (.png, .svg or .pdf)"), "FILE" },
-            { "dpi", 0, 0, G_OPTION_ARG_DOUBLE, &dpi, N_("Resolution of a PNG (default 300)"), "DPI" },
-              { "hydrogens", 0, 0, G_OPTION_ARG_NONE, &hydrogens, N_("Show the ring hydrogens on the chairs"), NULL },
-                { NULL } };
+    { "figure", 'f', 0, G_OPTION_ARG_STRING, &figure, N_("structure, chairs, profile or scan"), "FIGURE" },
+    { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write to FILE (.png, .svg or .pdf)"), "FILE" },
+    { "dpi", 0, 0, G_OPTION_ARG_DOUBLE, &dpi, N_("Resolution of a PNG (default 300)"), "DPI" },
+    { "hydrogens", 0, 0, G_OPTION_ARG_NONE, &hydrogens, N_("Show the ring hydrogens on the chairs"), NULL },
+    { "anti-periplanar", 0, 0, G_OPTION_ARG_NONE, &anti,
+      N_("Chairs: mark each leaving group and its anti-periplanar β-hydrogens"), NULL },
+    { NULL }
+  };
   g_autoptr (GOptionContext) context = g_option_context_new (_("[DOCUMENT.json] — draw one figure to PNG, SVG or PDF"));
   static const char *const exts[] = { ".png", ".svg", ".pdf", NULL };
   g_autoptr (GError) error = NULL;
@@ -72,7 +75,8 @@ cw_cli_draw (int argc, char **argv)
   cw_render_options_init (&opt);
   opt.unit = cw_document_get_energy_unit (doc);
   opt.temperature_unit = cw_document_get_temperature_unit (doc);
-  opt.show_hydrogens = hydrogens;
+  opt.show_hydrogens = hydrogens || anti;
+  opt.highlight_reactivity = anti;
   if (!cw_render_export_figure (fig, data, doc, &opt, output, dpi, &error))
     return cw_cli_error ("draw", CW_EXIT_ANALYSIS, "%s", error->message);
   return CW_EXIT_OK;
@@ -84,14 +88,16 @@ cw_cli_report (int argc, char **argv)
   g_auto (CwCliInput) input = { 0 };
   g_autofree char *output = NULL, *paper = NULL;
   GOptionEntry     entries[] = {
-        { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write the report to FILE.pdf"), "FILE" },
-          { "paper", 0, 0, G_OPTION_ARG_STRING, &paper, N_("Paper size: a4 (default) or letter"), "SIZE" },
-            { NULL } };
+    { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write the report to FILE.pdf"), "FILE" },
+    { "paper", 0, 0, G_OPTION_ARG_STRING, &paper, N_("Paper size: a4 (default) or letter"), "SIZE" },
+    { NULL }
+  };
   g_autoptr (GOptionContext) context = g_option_context_new (_("[DOCUMENT.json] — a one-page PDF report"));
   static const char *const exts[] = { ".pdf", NULL };
   g_autoptr (GError) error = NULL;
   g_autoptr (CwData) data = NULL;
   g_autoptr (CwDocument) doc = NULL;
+  g_autoptr (CwGeometryData) gd = NULL;
   int code = CW_EXIT_OK;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
@@ -115,7 +121,14 @@ cw_cli_report (int argc, char **argv)
   doc = cw_cli_input_load (&input, argc > 1 ? argv[1] : NULL, &data, &code);
   if (doc == NULL)
     return code;
-  if (!cw_render_export_report (data, doc, paper ? paper : "a4", output, &error))
+  if (input.data_dir != NULL)
+    {
+      /* the geometry table comes from the same folder as the other tables */
+      gd = cw_geometry_data_new_from_dir (input.data_dir, &error);
+      if (gd == NULL)
+        return cw_cli_error ("report", CW_EXIT_ANALYSIS, "%s", error->message);
+    }
+  if (!cw_render_export_report_with_geometry (data, gd, doc, paper ? paper : "a4", output, &error))
     return cw_cli_error ("report", CW_EXIT_ANALYSIS, "%s", error->message);
   return CW_EXIT_OK;
 }
