@@ -3,6 +3,8 @@
 #include <cairo-svg.h>
 #include <glib/gi18n.h>
 
+#include "cw-app-data.h"
+#include "cw-geometry.h"
 #include "cw-window-private.h"
 
 #define EXPORT_DPI 300.0
@@ -33,7 +35,35 @@ lookup_figure (const char *name,
   return FALSE;
 }
 
-/* target is "FIGURE.EXT" (e.g. "chairs.svg") or "report-a4.pdf" / "report-letter.pdf".
+/* The idealised 3D chair (chair 0 or 1) as XYZ, written atomically. */
+static gboolean
+export_chair_xyz (CwWindow   *self,
+                  int         chair,
+                  const char *path,
+                  GError    **error)
+{
+  const CwMolecule     *mol = cw_document_peek_molecule (self->doc);
+  const CwGeometryData *gd = cw_app_get_geometry (error);
+  g_autofree char      *spec = NULL;
+  g_autofree char      *comment = NULL;
+  g_autofree char      *text = NULL;
+  CwChairGeometry       g;
+
+  if (gd == NULL || !cw_chair_geometry_build (gd, mol, chair, &g, error))
+    return FALSE;
+  spec = cw_molecule_dup_spec (mol);
+  if (self->an_valid)
+    comment = g_strdup_printf ("Chairwise chair %d of %s (%.1f %% at %.1f K); idealised geometry, an estimate",
+                               chair + 1, spec, 100 * self->an.pop[chair], self->an.temperature);
+  else
+    comment = g_strdup_printf ("Chairwise chair %d of %s; idealised geometry, an estimate", chair + 1, spec);
+  text = cw_chair_geometry_to_xyz (&g, comment);
+  /* Temporary file, then rename: an existing file is never left half written. */
+  return g_file_set_contents_full (path, text, -1, G_FILE_SET_CONTENTS_CONSISTENT, 0666, error);
+}
+
+/* target is "FIGURE.EXT" (e.g. "chairs.svg"), "report-a4.pdf" / "report-letter.pdf", or
+ * "chair1.xyz" / "chair2.xyz" (the 3D chairs).
  * Exports always use the light style (the render layer ignores dark for files). */
 gboolean
 cw_window_export_to (CwWindow   *self,
@@ -48,8 +78,18 @@ cw_window_export_to (CwWindow   *self,
 
   if (dot != NULL)
     *dot = '\0';
+  if (g_strcmp0 (target, "chair1.xyz") == 0 || g_strcmp0 (target, "chair2.xyz") == 0)
+    return export_chair_xyz (self, target[5] - '1', path, error);
   if (g_strcmp0 (fig_name, "report-a4") == 0 || g_strcmp0 (fig_name, "report-letter") == 0)
-    return cw_render_export_report (self->data, self->doc, fig_name + strlen ("report-"), path, error);
+    {
+      /* The window's own geometry table, so the report's couplings and reactions match the pages. */
+      const CwGeometryData *gd = cw_app_get_geometry (error);
+
+      if (gd == NULL)
+        return FALSE;
+      return cw_render_export_report_with_geometry (self->data, gd, self->doc, fig_name + strlen ("report-"),
+                                                    path, error);
+    }
   if (!lookup_figure (fig_name, &i))
     {
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT, _("Unknown figure “%s”"), target);

@@ -166,25 +166,60 @@ update_reactions (CwWindow             *self,
   gtk_label_set_text (self->reactions_note, note->str);
 }
 
+/* One "Open" button per isomer row, in the column after the texts: opening an isomer
+ * makes a new window, so the work in this one stays as it is. */
+static void
+set_isomer_buttons (CwWindow *self,
+                    guint     n_isomers,
+                    int       current)
+{
+  GPtrArray *pool = g_object_get_data (G_OBJECT (self->isomers_grid), "cw-open-buttons");
+
+  if (pool == NULL)
+    {
+      pool = g_ptr_array_new ();
+      g_object_set_data_full (G_OBJECT (self->isomers_grid), "cw-open-buttons", pool,
+                              (GDestroyNotify) g_ptr_array_unref);
+    }
+  while (pool->len < n_isomers)
+    {
+      GtkWidget *button = gtk_button_new_with_mnemonic (_("_Open"));
+
+      gtk_widget_set_valign (button, GTK_ALIGN_CENTER);
+      gtk_actionable_set_action_name (GTK_ACTIONABLE (button), "win.open-isomer");
+      gtk_actionable_set_action_target (GTK_ACTIONABLE (button), "i", (int) pool->len);
+      gtk_widget_set_tooltip_text (button, _("Open this isomer in a new window"));
+      gtk_grid_attach (self->isomers_grid, button, 5, pool->len + 1, 1, 1);
+      g_ptr_array_add (pool, button);
+    }
+  for (guint i = 0; i < pool->len; i++)
+    gtk_widget_set_visible (g_ptr_array_index (pool, i), i < n_isomers && (int) i != current);
+}
+
 static void
 update_isomers (CwWindow *self)
 {
   const CwMolecule *mol = cw_document_peek_molecule (self->doc);
   CwEnergyUnit      unit = cw_window_get_energy_unit (self);
   g_autoptr (GPtrArray) cells = g_ptr_array_new_with_free_func (g_free);
-  g_autoptr (CwIsomerSet) set = NULL;
   g_autoptr (GError) error = NULL;
-  g_autofree char *current = cw_smiles_write (mol);
-  CwConditions     cond;
+  CwConditions cond;
+  CwIsomerSet *set;
+  int          current;
 
   cw_document_get_conditions (self->doc, &cond);
-  set = cw_isomers_enumerate (self->data, mol, &cond, &error);
+  g_clear_pointer (&self->isomers, cw_isomer_set_free);
+  self->isomers = cw_isomers_enumerate (self->data, mol, &cond, &error);
+  set = self->isomers;
   if (set == NULL)
     {
       cw_window_grid_set_rows (self->isomers_grid, 5, NULL, 0);
+      set_isomer_buttons (self, 0, -1);
       gtk_label_set_text (self->isomers_note, error->message);
       return;
     }
+  /* Compared by relative configuration: a chiral isomer is listed by one enantiomer. */
+  current = cw_isomer_set_find (set, mol);
   g_ptr_array_add (cells, g_strdup (_("Isomer")));
   g_ptr_array_add (cells, g_strdup_printf (_("G rel. (%s)"), cw_energy_unit_symbol (unit)));
   g_ptr_array_add (cells, g_strdup (_("At equilibrium")));
@@ -195,16 +230,69 @@ update_isomers (CwWindow *self)
       const CwIsomer   *iso = g_ptr_array_index (set->isomers, i);
       const CwAnalysis *an = &iso->analysis;
       const char       *config = iso->configuration && *iso->configuration ? iso->configuration : "–";
-      gboolean          this_one = g_strcmp0 (iso->smiles, current) == 0;
 
-      g_ptr_array_add (cells, this_one ? g_strdup_printf (_("%s (this document)"), config) : g_strdup (config));
+      g_ptr_array_add (cells, (int) i == current ? g_strdup_printf (_("%s (this document)"), config) : g_strdup (config));
       g_ptr_array_add (cells, g_strdup_printf ("%.2f", cw_energy_from_kcal (iso->g_rel, unit)));
       g_ptr_array_add (cells, g_strdup_printf ("%.1f %%", iso->fraction * 100.0));
       g_ptr_array_add (cells, g_strdup_printf ("%.0f %%", MAX (an->pop[0], an->pop[1]) * 100.0));
       g_ptr_array_add (cells, g_strdup (iso->smiles));
     }
   cw_window_grid_set_rows (self->isomers_grid, 5, (const char **) cells->pdata, cells->len / 5);
+  set_isomer_buttons (self, set->isomers->len, current);
   gtk_label_set_text (self->isomers_note, cw_isomers_method_text ());
+}
+
+/* A copy of this document (temperature, solvent, custom groups, notes) holding isomer
+ * index of the isomers page, in a new window. The new window starts modified: it is
+ * unsaved work, and autosave keeps it. */
+CwWindow *
+cw_window_open_isomer (CwWindow *self,
+                       int       index,
+                       GError  **error)
+{
+  const CwIsomer  *iso;
+  CwDocument      *doc;
+  CwWindow        *win;
+  const char      *title = cw_document_get_title (self->doc);
+
+  if (self->isomers == NULL || index < 0 || (guint) index >= self->isomers->isomers->len)
+    {
+      g_set_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT,
+                   _("There is no isomer number %d in the list"), index + 1);
+      return NULL;
+    }
+  iso = g_ptr_array_index (self->isomers->isomers, index);
+  doc = cw_document_copy (self->doc);
+  cw_document_set_molecule (doc, iso->molecule);
+  if (title != NULL && *title != '\0' && iso->configuration != NULL && *iso->configuration != '\0')
+    {
+      /* TRANSLATORS: the title of a document opened from the isomers page: "Title (trans)" */
+      g_autofree char *new_title = g_strdup_printf (_("%s (%s)"), title, iso->configuration);
+
+      cw_document_set_title (doc, new_title);
+    }
+  win = cw_window_new (gtk_window_get_application (GTK_WINDOW (self)));
+  cw_window_set_document (win, doc, NULL, TRUE);
+  gtk_window_present (GTK_WINDOW (win));
+  return win;
+}
+
+static void
+open_isomer_action (GtkWidget  *widget,
+                    const char *action_name,
+                    GVariant   *param)
+{
+  CwWindow *self = CW_WINDOW (widget);
+  g_autoptr (GError) error = NULL;
+
+  if (cw_window_open_isomer (self, g_variant_get_int32 (param), &error) == NULL)
+    cw_window_show_error (self, _("The isomer could not be opened"), error);
+}
+
+void
+cw_window_class_add_page_actions (GtkWidgetClass *widget_class)
+{
+  gtk_widget_class_install_action (widget_class, "win.open-isomer", "i", open_isomer_action);
 }
 
 void

@@ -3,6 +3,7 @@
 #include "cw-couplings.h"
 #include "cw-group-chooser.h"
 #include "cw-history.h"
+#include "cw-isomers.h"
 #include "cw-reactivity.h"
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
@@ -59,6 +60,7 @@ struct _CwWindow
   char         *analysis_error;
   CwCouplings  *couplings; /* 11 kB: kept on the heap, reused */
   CwReactivity *reactivity;
+  CwIsomerSet  *isomers; /* what the isomers page shows, NULL until it is shown */
 
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
    * what an edit would otherwise spend most of its time on) */
@@ -95,7 +97,11 @@ void              cw_window_render_options (CwWindow        *self,
                                             CwRenderOptions *opt);
 
 /* cw-window-pages.c: the Couplings, Reactions and Isomers pages, computed only when shown. */
-void cw_window_update_pages (CwWindow *self);
+void      cw_window_update_pages (CwWindow *self);
+void      cw_window_class_add_page_actions (GtkWidgetClass *widget_class);
+CwWindow *cw_window_open_isomer (CwWindow *self,
+                                 int       index,
+                                 GError  **error);
 void cw_window_grid_set_rows (GtkGrid     *grid,
                               guint        n_columns,
                               const char **cells,

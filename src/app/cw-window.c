@@ -357,6 +357,7 @@ cw_window_finalize (GObject *object)
   g_clear_pointer (&self->term_cells, g_ptr_array_unref);
   g_clear_pointer (&self->couplings, g_free);
   g_clear_pointer (&self->reactivity, g_free);
+  g_clear_pointer (&self->isomers, cw_isomer_set_free);
   g_clear_pointer (&self->flag_rows, g_ptr_array_unref);
 
   G_OBJECT_CLASS (cw_window_parent_class)->finalize (object);
@@ -424,6 +425,7 @@ cw_window_class_init (CwWindowClass *klass)
   cw_window_class_add_file_actions (widget_class);
   cw_window_class_add_export_actions (widget_class);
   cw_window_class_add_smiles_actions (widget_class);
+  cw_window_class_add_page_actions (widget_class);
 }
 
 static void

@@ -369,14 +369,22 @@ static gboolean
 fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, int *hi)
 {
   const CwSmGraph *g = r->g;
-  int              a = G_MAXINT, b = 0, inside = 0;
+  int              a = G_MAXINT, b = 0;
+
+  int lo_atom = G_MAXINT, hi_atom = -1;
 
   for (int k = 0; k < n; k++)
     {
       const CwSmAtom *x = &g->atoms[atoms[k]];
       a = MIN (a, x->pos);
       b = MAX (b, x->pos + x->len);
+      lo_atom = MIN (lo_atom, atoms[k]);
+      hi_atom = MAX (hi_atom, atoms[k]);
     }
+  /* atoms are numbered in text order: the stretch holds no other atom exactly when the
+   * fragment's atoms are consecutive */
+  if (hi_atom - lo_atom + 1 != n)
+    return FALSE;
   while (b < g->text_len)
     {
       char c = g->text[b];
@@ -391,10 +399,6 @@ fragment_span (const Reading *r, guint8 mark, const int *atoms, int n, int *lo, 
         break;
     }
   if (b - a > CW_SM_FRAG_TEXT)
-    return FALSE;
-  for (int k = 0; k < g->n_atoms; k++)
-    inside += g->atoms[k].pos >= a && g->atoms[k].pos < b;
-  if (inside != n)
     return FALSE;
   for (int c = 0; c < g->n_closures; c++)
     {

@@ -190,6 +190,62 @@ test_reactions_page (void)
   destroy_window (win);
 }
 
+static CwWindow *
+find_other_window (CwWindow *win)
+{
+  GListModel *toplevels = gtk_window_get_toplevels (); /* borrowed */
+  CwWindow   *other = NULL;
+
+  for (guint i = 0; i < g_list_model_get_n_items (toplevels); i++)
+    {
+      g_autoptr (GObject) w = g_list_model_get_item (toplevels, i);
+
+      if (CW_IS_WINDOW (w) && CW_WINDOW (w) != win)
+        other = CW_WINDOW (w);
+    }
+  return other;
+}
+
+/* The isomers page opens the cis isomer (row 1, with its "Open" button) in a new window;
+ * the trans document stays as it was. */
+static void
+check_open_isomer (CwWindow *win)
+{
+  GtkWidget       *button = gtk_grid_get_child_at (win->isomers_grid, 5, 1);
+  GtkWidget       *current_button = gtk_grid_get_child_at (win->isomers_grid, 5, 2);
+  CwWindow        *other;
+  g_autofree char *config = NULL;
+  g_autofree char *old_config = NULL;
+
+  g_assert_true (GTK_IS_BUTTON (button));
+  g_assert_true (gtk_widget_get_visible (button));
+  /* The row of this document has nothing to open. */
+  g_assert_false (gtk_widget_get_visible (current_button));
+  g_assert_null (find_other_window (win));
+  g_signal_emit_by_name (button, "clicked");
+  app_test_pump (50, NULL);
+  other = find_other_window (win);
+  g_assert_nonnull (other);
+  config = cw_molecule_dup_configuration (cw_document_peek_molecule (cw_window_get_document (other)));
+  g_assert_cmpstr (config, ==, "cis");
+  g_assert_cmpfloat_with_epsilon (cw_document_get_temperature (cw_window_get_document (other)), 298.15, 1e-9);
+  g_assert_true (cw_window_get_modified (other));
+  g_assert_null (cw_window_get_file (other));
+  /* cis-1,3: the diequatorial chair wins by more than 2 A(Me) (Eliel, Wilen & Mander 1994). */
+  g_assert_cmpfloat (fabs (cw_window_get_analysis (other)->delta_g), >, 2 * 1.74);
+  old_config = cw_molecule_dup_configuration (cw_document_peek_molecule (cw_window_get_document (win)));
+  g_assert_cmpstr (old_config, ==, "trans");
+  destroy_window (other);
+
+  /* A bad index says so and opens nothing. */
+  {
+    g_autoptr (GError) error = NULL;
+
+    g_assert_null (cw_window_open_isomer (win, 7, &error));
+    g_assert_error (error, G_IO_ERROR, G_IO_ERROR_INVALID_ARGUMENT);
+  }
+}
+
 static void
 test_isomers_page (void)
 {
@@ -209,6 +265,7 @@ test_isomers_page (void)
    * G(trans) − G(cis) = A(Me) − RT ln 2 (R from CODATA 2018). */
   g_assert_cmpfloat_with_epsilon (g_ascii_strtod (cell_text (win->isomers_grid, 1, 2), NULL),
                                   1.74 - 8.314462618 / 4184.0 * 298.15 * log (2.0), 0.02);
+  check_open_isomer (win);
   destroy_window (win);
 }
 
