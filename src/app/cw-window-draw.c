@@ -31,6 +31,13 @@ cw_window_render_options (CwWindow        *self,
   opt->temperature_unit = cw_window_get_temperature_unit (self);
   opt->dark = widget != NULL && widget_is_dark (widget);
   opt->highlight_sub = -1;
+  /* Reaction geometry on the chairs, from the same table as the Reactions page. */
+  if (gtk_check_button_get_active (self->reactivity_check) && self->reactivity_valid)
+    {
+      opt->highlight_reactivity = TRUE;
+      opt->reactivity_sub = -1;
+      opt->reactivity = self->reactivity;
+    }
   for (int i = 0; i < mol->n_subs; i++)
     if (mol->subs[i].position == sel)
       {

@@ -130,7 +130,8 @@ update_reactions (CwWindow             *self,
   if (self->reactivity == NULL)
     self->reactivity = g_new0 (CwReactivity, 1);
   r = self->reactivity;
-  if (!cw_reactivity_compute (gd, mol, self->an.pop, self->an.temperature, r, &error))
+  self->reactivity_valid = cw_reactivity_compute (gd, mol, self->an.pop, self->an.temperature, r, &error);
+  if (!self->reactivity_valid)
     {
       cw_window_grid_set_rows (self->reactions_grid, 5, NULL, 0);
       gtk_label_set_text (self->reactions_note, error->message);
@@ -299,26 +300,28 @@ void
 cw_window_update_pages (CwWindow *self)
 {
   const char *page = gtk_stack_get_visible_child_name (self->lower_stack);
+  gboolean    couplings = g_strcmp0 (page, "couplings") == 0;
+  /* The reaction geometry is also needed while the chairs show it. */
+  gboolean    reactions = g_strcmp0 (page, "reactions") == 0 || gtk_check_button_get_active (self->reactivity_check);
   g_autoptr (GError) error = NULL;
   const CwGeometryData *gd;
 
   /* Only the page on screen is computed; the others when they are shown. */
-  if (page == NULL || !self->an_valid)
+  self->reactivity_valid = FALSE;
+  if (!self->an_valid)
     return;
   if (g_strcmp0 (page, "isomers") == 0)
     update_isomers (self);
-  else if (g_strcmp0 (page, "couplings") == 0 || g_strcmp0 (page, "reactions") == 0)
+  if (!couplings && !reactions)
+    return;
+  gd = cw_app_get_geometry (&error);
+  if (gd == NULL)
     {
-      gd = cw_app_get_geometry (&error);
-      if (gd == NULL)
-        {
-          gtk_label_set_text (g_strcmp0 (page, "couplings") == 0 ? self->couplings_note : self->reactions_note,
-                              error->message);
-          return;
-        }
-      if (g_strcmp0 (page, "couplings") == 0)
-        update_couplings (self, gd);
-      else
-        update_reactions (self, gd);
+      gtk_label_set_text (couplings ? self->couplings_note : self->reactions_note, error->message);
+      return;
     }
+  if (couplings)
+    update_couplings (self, gd);
+  if (reactions)
+    update_reactions (self, gd);
 }

@@ -46,6 +46,7 @@ struct _CwWindow
   GtkLabel       *couplings_note;
   GtkGrid        *reactions_grid;
   GtkLabel       *reactions_note;
+  GtkCheckButton *reactivity_check;
   GtkGrid        *isomers_grid;
   GtkLabel       *isomers_note;
 
@@ -59,7 +60,7 @@ struct _CwWindow
   char         *autosave_path;
   char         *analysis_error;
   CwCouplings  *couplings; /* 11 kB: kept on the heap, reused */
-  CwReactivity *reactivity;
+  CwReactivity *reactivity; /* valid when reactivity_valid */
   CwIsomerSet  *isomers; /* what the isomers page shows, NULL until it is shown */
 
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
@@ -71,6 +72,7 @@ struct _CwWindow
   const CwData *data; /* process-wide, see cw-app-data.h */
   CwAnalysis    an;
   gboolean      an_valid;
+  gboolean      reactivity_valid;
   guint         serial;
   guint         saved_serial;
   guint         next_serial;

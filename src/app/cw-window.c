@@ -259,6 +259,15 @@ lower_page_changed_cb (CwWindow *self)
 }
 
 static void
+reactivity_toggled_cb (CwWindow *self)
+{
+  /* The marks need the reaction geometry even while another page is shown. */
+  if (self->doc != NULL)
+    cw_window_update_pages (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area));
+}
+
+static void
 settings_changed_cb (CwWindow   *self,
                      const char *key)
 {
@@ -408,6 +417,7 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, CwWindow, couplings_note);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, reactions_grid);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, reactions_note);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, reactivity_check);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, isomers_grid);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, isomers_note);
   gtk_widget_class_bind_template_callback (widget_class, ring_selected_cb);
@@ -419,6 +429,7 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_callback (widget_class, down_clear_cb);
   gtk_widget_class_bind_template_callback (widget_class, temperature_value_changed_cb);
   gtk_widget_class_bind_template_callback (widget_class, lower_page_changed_cb);
+  gtk_widget_class_bind_template_callback (widget_class, reactivity_toggled_cb);
 
   gtk_widget_class_install_action (widget_class, "win.show-help-overlay", NULL, show_help_overlay_action);
   cw_window_class_add_edit_actions (widget_class);

@@ -608,8 +608,14 @@ progress (Batch *b, gboolean final)
   if (now - b->last_progress < 500000)
     return;
   b->last_progress = now;
-  fprintf (b->err, _("\r%s: %" G_GUINT64_FORMAT " lines, %" G_GUINT64_FORMAT " errors…"), b->opt->command,
-                      b->sum->lines, b->sum->errors);
+  {
+    /* The numbers are formatted first: xgettext cannot see through G_GUINT64_FORMAT. */
+    g_autofree char *lines = g_strdup_printf ("%" G_GUINT64_FORMAT, b->sum->lines);
+    g_autofree char *errors = g_strdup_printf ("%" G_GUINT64_FORMAT, b->sum->errors);
+
+    /* TRANSLATORS: progress: command, number of lines, number of errors */
+    fprintf (b->err, _("\r%s: %s lines, %s errors…"), b->opt->command, lines, errors);
+  }
   fflush (b->err);
 }
 
@@ -772,16 +778,29 @@ out:
 char *
 cw_batch_summary_dup_text (const CwBatchSummary *s)
 {
-  GString *t = g_string_new (NULL);
+  GString         *t = g_string_new (NULL);
+  /* The numbers are formatted first: xgettext cannot see through G_GUINT64_FORMAT. */
+  g_autofree char *compounds = g_strdup_printf ("%" G_GUINT64_FORMAT, s->compounds);
+  g_autofree char *lines = g_strdup_printf ("%" G_GUINT64_FORMAT, s->lines);
+  g_autofree char *analysed = g_strdup_printf ("%" G_GUINT64_FORMAT, s->analysed);
+  g_autofree char *rows = g_strdup_printf ("%" G_GUINT64_FORMAT, s->rows);
+  g_autofree char *errors = g_strdup_printf ("%" G_GUINT64_FORMAT, s->errors);
 
-  g_string_append_printf (t, _("%" G_GUINT64_FORMAT " compounds in %" G_GUINT64_FORMAT " lines: %" G_GUINT64_FORMAT
-                               " analysed (%" G_GUINT64_FORMAT " rows), %" G_GUINT64_FORMAT " with errors"),
-                                s->compounds, s->lines, s->analysed, s->rows, s->errors);
+  /* TRANSLATORS: compounds, lines, analysed, rows, errors (all numbers) */
+  g_string_append_printf (t, _("%s compounds in %s lines: %s analysed (%s rows), %s with errors"),
+                          compounds, lines, analysed, rows, errors);
   if (s->expanded)
-    g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with open ring stereocentres (one row per cis/trans isomer)"),
-                                  s->expanded);
+    {
+      g_autofree char *n = g_strdup_printf ("%" G_GUINT64_FORMAT, s->expanded);
+
+      g_string_append_printf (t, _(", %s with open ring stereocentres (one row per cis/trans isomer)"), n);
+    }
   if (s->salts)
-    g_string_append_printf (t, _(", %" G_GUINT64_FORMAT " with parts left out (largest part kept)"), s->salts);
+    {
+      g_autofree char *n = g_strdup_printf ("%" G_GUINT64_FORMAT, s->salts);
+
+      g_string_append_printf (t, _(", %s with parts left out (largest part kept)"), n);
+    }
   g_string_append_printf (t, _("; %.2f s (%.0f compounds/s)"), s->seconds,
                                 s->seconds > 0 ? s->compounds / s->seconds : 0.0);
   return g_string_free (t, FALSE);

@@ -1,7 +1,7 @@
 /* cw-smiles-canon.c: canonical ring numbering of a CwMolecule.
  *
  * Convention (shared with the SMILES reader and writer): seen from the up face, positions 1→6 run
- * anticlockwise. Renumbering in the other direction therefore swaps up and down (the ring is
+ * clockwise (as the flat drawing shows them). Renumbering in the other direction therefore swaps up and down (the ring is
  * turned over: the same molecule); swapping the faces alone gives the mirror image. */
 #include "config.h"
 

@@ -548,10 +548,11 @@ read_faces (Reading *r)
         for (int y = x + 1; y < 4; y++)
           inversions += w[x] > w[y];
       clockwise = (a->chirality == CW_SM_CHIRAL_CLOCKWISE) == (inversions % 2 == 0);
-      /* (previous, next, up, down) is clockwise: the first group is up when clockwise */
-      r->sub_face[subs[0]] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
+      /* positions run clockwise seen from the up face, so (previous, next, up, down) is
+       * anticlockwise: the first group is up when the order is anticlockwise */
+      r->sub_face[subs[0]] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
       if (n == 2)
-        r->sub_face[subs[1]] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
+        r->sub_face[subs[1]] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
     }
 }
 

@@ -30,8 +30,8 @@ even_permutation (const int w[4])
   return inversions % 2 == 0;
 }
 
-/* Seen from the up face with positions running anticlockwise, the order (previous ring carbon,
- * next ring carbon, up group, down group) is clockwise, i.e. @@. */
+/* Seen from the up face with positions running clockwise (as every drawing shows them), the
+ * order (previous ring carbon, next ring carbon, up group, down group) is anticlockwise, i.e. @. */
 static const char *
 ring_token (gboolean marked, int n_groups, const int w[4])
 {
@@ -40,8 +40,8 @@ ring_token (gboolean marked, int n_groups, const int w[4])
   if (!marked)
     return "C";
   if (n_groups == 1)
-    return clockwise ? "[C@@H]" : "[C@H]";
-  return clockwise ? "[C@@]" : "[C@]";
+    return clockwise ? "[C@H]" : "[C@@H]";
+  return clockwise ? "[C@]" : "[C@@]";
 }
 
 typedef struct

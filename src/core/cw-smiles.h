@@ -10,7 +10,7 @@ G_BEGIN_DECLS
  * Reading finds the one saturated all-carbon six-membered ring, cuts each substituent off at its
  * ring carbon and maps it to a table group by comparing canonical rooted fragments, so "OC(C)=O",
  * "O(C(=O)C)" and an acetoxy written towards the ring ("CC(=O)O[C@H]1…") all give OAc. Faces come
- * from @/@@: seen from the up face, positions 1→6 run anticlockwise (the same convention in the
+ * from @/@@: seen from the up face, positions 1→6 run clockwise, as drawn (the same convention in the
  * writer, so absolute configuration survives SMILES → molecule → SMILES). Molecules come back
  * canonically numbered (lowest locants, then the group table order, then up before down). */
 

@@ -190,6 +190,85 @@ test_reactions_page (void)
   destroy_window (win);
 }
 
+/* The chairs figure as drawn on screen, as a texture. */
+static GBytes *
+chairs_pixels (CwWindow *win)
+{
+  GtkWidget *area = GTK_WIDGET (win->chairs_area);
+  int        w = gtk_widget_get_width (area), h = gtk_widget_get_height (area);
+  g_autoptr (GdkPaintable) paintable = gtk_widget_paintable_new (area);
+  g_autoptr (GskRenderNode) node = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  GtkSnapshot *snapshot = gtk_snapshot_new ();
+  guchar      *data;
+
+  g_assert_cmpint (w, >, 0);
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  g_assert_nonnull (node);
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (win)), node,
+                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+  data = g_malloc ((gsize) w * h * 4);
+  gdk_texture_download (texture, data, (gsize) w * 4);
+  return g_bytes_new_take (data, (gsize) w * h * 4);
+}
+
+static void
+test_reactivity_marks (void)
+{
+  CwWindow        *win = new_window ();
+  CwRenderOptions  opt;
+  g_autoptr (GBytes) plain = NULL;
+  g_autoptr (GBytes) marked = NULL;
+  g_autoptr (GBytes) again = NULL;
+  const CwLeavingGroup *lg;
+  int                   major;
+
+  /* cis-4-tert-butylcyclohexyl bromide: Br axial in the populated chair, anti-periplanar to
+   * the two axial β-hydrogens on C2 and C6 (Eliel, Wilen & Mander 1994, ch. 11). The marks
+   * work from any lower page. */
+  gtk_stack_set_visible_child_name (win->lower_stack, "profile");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 1, "up", "bromo");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 4, "up", "tert-butyl");
+  app_test_pump (50, NULL);
+  cw_window_render_options (win, NULL, &opt);
+  g_assert_false (opt.highlight_reactivity);
+  plain = chairs_pixels (win);
+
+  gtk_check_button_set_active (win->reactivity_check, TRUE);
+  app_test_pump (50, NULL);
+  cw_window_render_options (win, NULL, &opt);
+  g_assert_true (opt.highlight_reactivity);
+  g_assert_true (opt.reactivity == win->reactivity);
+  g_assert_cmpint (opt.reactivity_sub, ==, -1);
+  g_assert_cmpint (win->reactivity->n_groups, ==, 1);
+  lg = &win->reactivity->groups[0];
+  major = cw_window_get_analysis (win)->pop[0] > 0.5 ? 0 : 1;
+  g_assert_true (lg->axial[major]);
+  g_assert_cmpint (lg->n_anti[major], ==, 2);
+  marked = chairs_pixels (win);
+  g_assert_false (g_bytes_equal (plain, marked));
+
+  /* An edit while marked keeps the marks current: trans has Br equatorial, no anti β-H. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.clear-carbon", "i", 4);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 4, "down", "tert-butyl");
+  app_test_pump (50, NULL);
+  lg = &win->reactivity->groups[0];
+  major = cw_window_get_analysis (win)->pop[0] > 0.5 ? 0 : 1;
+  g_assert_false (lg->axial[major]);
+  g_assert_cmpint (lg->n_anti[major], ==, 0);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  gtk_check_button_set_active (win->reactivity_check, FALSE);
+  app_test_pump (50, NULL);
+  cw_window_render_options (win, NULL, &opt);
+  g_assert_false (opt.highlight_reactivity);
+  again = chairs_pixels (win);
+  g_assert_true (g_bytes_equal (plain, again));
+  destroy_window (win);
+}
+
 static CwWindow *
 find_other_window (CwWindow *win)
 {
@@ -302,6 +381,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/pages/couplings", test_couplings_page);
   g_test_add_func ("/app/pages/reactions", test_reactions_page);
   g_test_add_func ("/app/pages/isomers", test_isomers_page);
+  g_test_add_func ("/app/pages/reactivity-marks", test_reactivity_marks);
   g_test_add_func ("/app/pages/shortcuts-window", test_shortcuts_window);
   return g_test_run ();
 }

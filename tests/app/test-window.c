@@ -328,6 +328,113 @@ test_export (void)
   destroy_window (win);
 }
 
+/* Reads an XYZ file (count line, comment line, "El x y z" lines) into elements and
+ * coordinates; fails the test if the format is wrong. */
+static int
+read_xyz (const char *path, char elements[][3], double xyz[][3], int max_atoms)
+{
+  g_autofree char *contents = NULL;
+  g_auto (GStrv) lines = NULL;
+  guint           n_lines;
+  int             n;
+  char           *end;
+
+  g_assert_true (g_file_get_contents (path, &contents, NULL, NULL));
+  lines = g_strsplit (contents, "\n", -1);
+  n_lines = g_strv_length (lines);
+  n = (int) strtol (lines[0], &end, 10);
+  g_assert_true (end != lines[0] && *end == '\0');
+  g_assert_cmpint (n, >, 0);
+  g_assert_cmpint (n, <=, max_atoms);
+  /* count + comment + n atom lines, and the final newline's empty piece */
+  g_assert_cmpuint (n_lines, ==, (guint) n + 3);
+  g_assert_cmpstr (lines[n + 2], ==, "");
+  for (int i = 0; i < n; i++)
+    {
+      char el[8];
+
+      g_assert_cmpint (sscanf (lines[i + 2], "%7s %lf %lf %lf", el, &xyz[i][0], &xyz[i][1], &xyz[i][2]), ==, 4);
+      g_assert_cmpuint (strlen (el), <=, 2);
+      g_strlcpy (elements[i], el, 3);
+    }
+  return n;
+}
+
+static double
+dist (const double a[3], const double b[3])
+{
+  return sqrt ((a[0] - b[0]) * (a[0] - b[0]) + (a[1] - b[1]) * (a[1] - b[1]) + (a[2] - b[2]) * (a[2] - b[2]));
+}
+
+/* Methylcyclohexane, methyl up on C1: axial in chair 1, equatorial in chair 2 (the axial bonds
+ * run along the ring's threefold axis, z in the file). Returns |cos| of the Me–C1 bond to z. */
+static double
+methyl_axis_cos (const char *path)
+{
+  char   el[32][3];
+  double xyz[32][3];
+  int    n = read_xyz (path, el, xyz, 32);
+  int    n_c = 0, methyl = -1, c1 = -1;
+
+  for (int i = 0; i < n; i++)
+    {
+      int bonded_c = 0, last = -1;
+
+      g_assert_true (g_strcmp0 (el[i], "C") == 0 || g_strcmp0 (el[i], "H") == 0);
+      if (g_strcmp0 (el[i], "C") != 0)
+        continue;
+      n_c++;
+      for (int j = 0; j < n; j++)
+        if (j != i && g_strcmp0 (el[j], "C") == 0 && dist (xyz[i], xyz[j]) < 1.65)
+          {
+            bonded_c++;
+            last = j;
+            /* C–C single bond 1.53 ± 0.02 Å (Allen et al., J. Chem. Soc. Perkin Trans. 2 1987, S1). */
+            g_assert_cmpfloat_with_epsilon (dist (xyz[i], xyz[j]), 1.53, 0.02);
+          }
+      if (bonded_c == 1)
+        {
+          methyl = i;
+          c1 = last;
+        }
+    }
+  g_assert_cmpint (n_c, ==, 7);
+  g_assert_cmpint (methyl, >=, 0);
+  return fabs (xyz[methyl][2] - xyz[c1][2]) / dist (xyz[methyl], xyz[c1]);
+}
+
+static void
+test_export_xyz (void)
+{
+  CwWindow        *win = new_window ();
+  g_autofree char *xyz1 = app_test_tmp_path ("chair1.xyz");
+  g_autofree char *xyz2 = app_test_tmp_path ("chair2.xyz");
+  g_autoptr (GError) error = NULL;
+
+  set_group (win, 1, "up", "methyl");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "chair1.xyz", xyz1);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "chair2.xyz", xyz2);
+  /* Axial: along the axis (cos 1); equatorial: at 109.5° − 90° ≈ 19.5° below the ring's mean
+   * plane at most, so |cos| < 0.5 (ideal tetrahedral geometry, common practice (no source)). */
+  g_assert_cmpfloat (methyl_axis_cos (xyz1), >, 0.95);
+  g_assert_cmpfloat (methyl_axis_cos (xyz2), <, 0.5);
+  /* Exporting again replaces the file whole. */
+  set_group (win, 1, "up", "hydroxy");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-to", "(ss)", "chair1.xyz", xyz1);
+  {
+    char   el[32][3];
+    double xyz[32][3];
+    int    n = read_xyz (xyz1, el, xyz, 32), n_o = 0;
+
+    for (int i = 0; i < n; i++)
+      n_o += g_strcmp0 (el[i], "O") == 0;
+    g_assert_cmpint (n_o, ==, 1);
+  }
+  g_assert_false (cw_window_export_to (win, "chair1.xyz", "/nonexistent-dir/x.xyz", &error));
+  g_assert_nonnull (error);
+  destroy_window (win);
+}
+
 static void
 test_copy_figure (void)
 {
@@ -440,6 +547,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/open-bad-file", test_open_bad_file);
   g_test_add_func ("/app/window/drop-document", test_drop_document);
   g_test_add_func ("/app/window/export", test_export);
+  g_test_add_func ("/app/window/export-xyz", test_export_xyz);
   g_test_add_func ("/app/window/copy-figure", test_copy_figure);
   g_test_add_func ("/app/window/unsaved-changes", test_unsaved_changes);
   g_test_add_func ("/app/window/autosave-restore", test_autosave_restore);

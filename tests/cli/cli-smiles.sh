@@ -43,7 +43,7 @@ contains "bad line named" "$tmp/err" "line 2:"
 contains "summary" "$tmp/err" "3 compounds in 3 lines"
 n=$((n + 1))
 if [ "$(wc -l <"$tmp/out.csv")" -eq 4 ]; then echo "ok $n - batch rows"; else echo "not ok $n - batch rows"; cat "$tmp/out.csv"; fail=1; fi
-contains "trans row" "$tmp/out.csv" '^3,trans,C\[C@@H\]1CC\[C@@H\](C)CC1,trans,2,-3.48'
+contains "trans row" "$tmp/out.csv" '^3,trans,C\[C@H\]1CC\[C@H\](C)CC1,trans,2,-3.48'
 check "batch json from stdin" 0 sh -c "printf 'OC1CCCCC1\n' | '$calc' batch - --json -q"
 contains "json results" "$tmp/out" '"results"'
 check "batch missing file" 1 "$calc" batch "$tmp/none.smi"

@@ -12,7 +12,9 @@ PROBE is the built cw-smiles-probe; SET.smi the reference set. For every SMILES 
      cis on an RDKit 3D embedding (ETKDG) of the input: the face of a group is the side of the
      plane of its carbon's two ring bonds on which its first atom lies;
   5. our molecular formula equals RDKit's CalcMolFormula, and our molar mass is within
-     0.05 g/mol of RDKit's MolWt (the two use slightly different tables of atomic weights).
+     0.05 g/mol of RDKit's MolWt (the two use slightly different tables of atomic weights);
+  6. where faces are written, each group's absolute face matches the embedding, "up" being the side
+     from which our positions 1 -> 6 run clockwise (the frame of every Chairwise drawing).
 Then coverage: every group of the table occurs, and the set has 1,1-, 1,2-, 1,3-, 1,4-, tri- and
 tetra-substituted rings, cis and trans. Output is TAP; every check names RDKit and its version.
 """
@@ -92,6 +94,26 @@ def faces_3d(smiles, subs):
     return faces
 
 
+def absolute_faces_3d(smiles, ring_order, subs):
+    """Face (+1 up, -1 down) of each substituent on a 3D embedding, taking "up" as the side from
+    which positions 1 -> 6 (our ring order) run clockwise, as in every Chairwise drawing."""
+    mol = Chem.AddHs(Chem.MolFromSmiles(smiles))
+    params = AllChem.ETKDGv3()
+    params.randomSeed = 0xC0FFEE
+    if AllChem.EmbedMolecule(mol, params) != 0:
+        return None
+    pos = mol.GetConformer().GetPositions()
+    faces = []
+    for s in subs:
+        i = ring_order.index(s["ring_atom"])
+        c, nxt, prv = pos[ring_order[i]], pos[ring_order[(i + 1) % 6]], pos[ring_order[i - 1]]
+        # seen from the up side, prev -> c -> next runs clockwise, so (next - c) x (prev - c)
+        # points away from that side
+        normal = np.cross(nxt - c, prv - c)
+        faces.append(-1 if np.dot(pos[s["root_atom"]] - c, normal) > 0 else 1)
+    return faces
+
+
 def hill_formula(mol):
     # RDKit writes D for [2H] with these flags, and the charge as a trailing +/- (with a count)
     return rdMolDescriptors.CalcMolFormula(mol, True, True)
@@ -132,7 +154,9 @@ def main():
                                                          text=True).stdout.splitlines()]
     out = subprocess.run([probe], input="\n".join(lines) + "\n", check=True, capture_output=True, text=True).stdout
     results = [json.loads(l) for l in out.splitlines()]
-    print("1..%d" % (len(lines) * 5 + 3))
+    with_faces = sum(1 for r in results if r.get("ok", True) and "ring" in r
+                     and any(s["face"] is not None for s in r["subs"]))
+    print("1..%d" % (len(lines) * 5 + 3 + with_faces))
     print("# reference: %s (Debian python3-rdkit), Python %s" % (RDKIT, sys.version.split()[0]))
     if len(results) != len(lines):
         print("Bail out! the probe answered %d lines for %d SMILES" % (len(results), len(lines)))
@@ -181,6 +205,15 @@ def main():
                             "cis" if a["face"] == b["face"] else "trans",
                             "cis" if faces[i] == faces[j] else "trans"))
         report(not bad, "%s: cis/trans relations match an %s 3D embedding" % (smiles, RDKIT), "; ".join(bad))
+
+        if "ring" in r and any(s["face"] is not None for s in r["subs"]):
+            faces = absolute_faces_3d(smiles, r["ring"], r["subs"])
+            wrong = [] if faces is not None else ["no 3D embedding"]
+            for s, f in zip(r["subs"], faces or []):
+                if s["face"] is not None and (s["face"] == "up") != (f > 0):
+                    wrong.append("%s(atom %d): ours %s" % (s["group"], s["root_atom"], s["face"]))
+            report(not wrong, "%s: up/down faces (positions clockwise seen from the up face) match "
+                   "an %s 3D embedding" % (smiles, RDKIT), "; ".join(wrong))
 
         part, _ = largest_part(mol)
         f_theirs = hill_formula(part)

@@ -53,6 +53,12 @@ probe (CwSmilesReader *reader, const CwData *data, const char *smiles)
       cJSON_AddStringToObject (o, "formula", formula);
       cJSON_AddNumberToObject (o, "charge", f.charge);
       cJSON_AddNumberToObject (o, "mass", f.molar_mass);
+      {
+        /* the ring atoms in the reader's position order, the frame the faces are read in */
+        cJSON *ring = cJSON_AddArrayToObject (o, "ring");
+        for (int k = 0; k < CW_RING_SIZE; k++)
+          cJSON_AddItemToArray (ring, cJSON_CreateNumber (detail.ring_atom[k]));
+      }
       for (int s = 0; s < n; s++)
         {
           cJSON *x = cJSON_CreateObject ();
