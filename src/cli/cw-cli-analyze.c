@@ -72,7 +72,10 @@ print_text (const CwDocument *doc, const CwMolecule *mol, const CwAnalysis *an)
     }
   printf (_("ΔG° = G(chair 2) − G(chair 1) = %+.2f ± %.2f %s\n"), cw_energy_from_kcal (an->delta_g, unit),
           cw_energy_from_kcal (an->sigma, unit), u);
-  printf (_("K = [chair 2]/[chair 1] = %.4g\n"), an->K);
+  if (an->K > 1e-9 && an->K < 1e9)
+    printf (_("K = [chair 2]/[chair 1] = %.4g\n"), an->K);
+  else /* beyond double range at low T: the logarithm stays finite */
+    printf (_("K = [chair 2]/[chair 1] = 10^%.2f\n"), -an->delta_g / (CW_R_KCAL * an->temperature * G_LN10));
   print_population (0, an);
   print_population (1, an);
   printf (_("Ring inversion: barrier ≈ %.1f %s from the lower chair; k(1→2) = %.3g s⁻¹, "
@@ -180,6 +183,7 @@ cw_cli_analysis_json (const CwDocument *doc, const CwMolecule *mol, const CwAnal
   cJSON_AddNumberToObject (o, "delta_g_kj_mol", an->delta_g * CW_J_PER_CAL);
   cJSON_AddNumberToObject (o, "delta_g_sigma_kj_mol", an->sigma * CW_J_PER_CAL);
   cJSON_AddNumberToObject (o, "K", an->K);
+  cJSON_AddNumberToObject (o, "log10_K", -an->delta_g / (CW_R_KCAL * an->temperature * G_LN10));
   cJSON_AddNumberToObject (o, "population_chair1", an->pop[0]);
   cJSON_AddNumberToObject (o, "population_chair2", an->pop[1]);
   add_pair (o, "population_chair1_interval", an->pop_low[0], an->pop_high[0]);

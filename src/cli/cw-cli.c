@@ -1,6 +1,7 @@
 #include "config.h"
 
 #include <glib/gi18n.h>
+#include <errno.h>
 #include <locale.h>
 #include <stdio.h>
 #include <string.h>
@@ -59,8 +60,18 @@ main (int argc, char **argv)
   for (gsize i = 0; i < G_N_ELEMENTS (commands); i++)
     if (strcmp (argv[1], commands[i].name) == 0)
       {
+        int code;
+
         g_set_prgname (commands[i].name);
-        return commands[i].run (argc - 1, argv + 1);
+        code = commands[i].run (argc - 1, argv + 1);
+        /* a full disk or a closed pipe must not pass for success */
+        if (fflush (stdout) != 0 || ferror (stdout))
+          {
+            fprintf (stderr, _("chairwise-calc %s: cannot write the output: %s\n"), commands[i].name,
+                     g_strerror (errno));
+            return code == CW_EXIT_OK ? CW_EXIT_ANALYSIS : code;
+          }
+        return code;
       }
   fprintf (stderr, _("chairwise-calc: unknown command “%s”\n\n"), argv[1]);
   print_help (stderr);

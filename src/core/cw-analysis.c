@@ -460,8 +460,13 @@ finish_thermo (CwEngine *e, CwFlagCode symmetry)
   /* Model choice: the half-chair carries the mean of the two chairs' substituent strain. */
   mean = 0.5 * (an->chair[0].energy + an->chair[1].energy);
   an->barrier = ring->half_chair.g + mean - MIN (an->chair[0].energy, an->chair[1].energy);
-  an->k_forward = cw_eyring_rate (ring->half_chair.g + mean - an->chair[0].energy, T);
-  an->k_reverse = cw_eyring_rate (ring->half_chair.g + mean - an->chair[1].energy, T);
+  /* The transition state lies at least as high as the higher chair: a chair cannot leave faster
+   * than kB·T/h. */
+  an->barrier = MAX (an->barrier, fabs (an->delta_g));
+  an->k_forward = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[0].energy,
+                                       MAX (an->delta_g, 0.0)), T);
+  an->k_reverse = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[1].energy,
+                                       MAX (-an->delta_g, 0.0)), T);
   an->twist_boat = ring->twist_boat.g;
 }
 

@@ -6,6 +6,7 @@
 #include <glib/gstdio.h>
 #include <math.h>
 #include <string.h>
+#include <sys/stat.h>
 
 #include "cw-core-error.h"
 #include "cw-core-private.h"
@@ -258,6 +259,16 @@ cw_document_new_from_file (const char *path, const CwGroupTable *table, GError *
   gsize len = 0;
   GStatBuf st;
 
+  if (g_stat (path, &st) == 0 && !S_ISREG (st.st_mode))
+    {
+      if (S_ISDIR (st.st_mode))
+        g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_IO,
+                     _("%s: is a directory, not a document"), path);
+      else
+        g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_IO,
+                     _("%s: not a regular file (a device or a pipe), not a document"), path);
+      return NULL;
+    }
   if (g_stat (path, &st) == 0 && st.st_size > CW_DOCUMENT_MAX_SIZE)
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,

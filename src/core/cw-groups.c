@@ -182,6 +182,12 @@ parse_value_block (const cJSON *obj, const char *field, double *value, double *s
       !cw_json_get_number (block, "sigma", TRUE, sigma, inner, error) ||
       !cw_json_get_string (block, "source", TRUE, source, inner, error))
     return FALSE;
+  if (fabs (*value) > 20 || *sigma > 10)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: “kcal_mol” must lie within ±20 and “sigma” at most 10"), inner);
+      return FALSE;
+    }
   if (*sigma < 0)
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
@@ -239,6 +245,12 @@ parse_thermo (const cJSON *obj, CwGroup *g, const char *where, GError **error)
       !cw_json_get_number (block, "ds_cal_mol_k", TRUE, &g->ds, inner, error) ||
       !cw_json_get_string (block, "source", TRUE, &src, inner, error))
     return FALSE;
+  if (fabs (g->dh) > 20 || fabs (g->ds) > 50)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: ΔH° must lie within ±20 kcal/mol and ΔS° within ±50 cal/(mol·K)"), inner);
+      return FALSE;
+    }
   g->has_thermo = TRUE;
   g->thermo_source = g_strdup (src);
   return TRUE;
@@ -291,6 +303,12 @@ parse_identity (const cJSON *obj, CwGroup *g, const char *where, GError **error)
   g->markup = g_strdup (markup);
   g->smiles = g_strdup (smiles);
   g->formula = g_strdup (formula);
+  if (unsat != floor (unsat) || unsat < 0 || unsat > 50 || charge != floor (charge) || fabs (charge) > 4)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: “unsaturation” must be a whole number 0–50 and “charge” −4…4"), where);
+      return FALSE;
+    }
   g->unsaturation = (int) unsat;
   if (!markup_ok (markup) ||
       !cw_group_parse_formula (formula, g->elements, &g->charge, error) ||

@@ -3,6 +3,7 @@
 #include "cw-interactions.h"
 
 #include <glib/gi18n-lib.h>
+#include <math.h>
 #include <string.h>
 
 #include "cw-core-error.h"
@@ -79,6 +80,12 @@ parse_pair (const cJSON *obj, int index, const char *name, CwPairEntry *e, GErro
                    _("%s: field “kind” is “%s”; expected syn-axial, gauche or geminal"), where, kind);
       return FALSE;
     }
+  if (fabs (e->value) > 20 || e->sigma > 10)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: “kcal_mol” must lie within ±20 and “sigma” at most 10"), where);
+      return FALSE;
+    }
   if (e->sigma < 0 || *src == '\0' || *a == '\0' || *b == '\0')
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
@@ -110,6 +117,12 @@ parse_level (const cJSON *ring, const char *field, CwRingLevel *level, const cha
       !cw_json_get_number (obj, "sigma", TRUE, &level->sigma, where, error) ||
       !cw_json_get_string (obj, "source", TRUE, &src, where, error))
     return FALSE;
+  if (level->g < 0 || level->g > 30 || level->sigma < 0 || level->sigma > 10)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: “kcal_mol” must lie within 0–30 and “sigma” within 0–10"), where);
+      return FALSE;
+    }
   level->source = g_strdup (src);
   return TRUE;
 }
@@ -155,6 +168,15 @@ parse_fallback (const cJSON *root, CwInteractionTable *t, const char *name, GErr
       !cw_json_get_number (obj, "min_sigma", TRUE, &t->fallback.min_sigma, where, error) ||
       !cw_json_get_string (obj, "rule", TRUE, &rule, where, error))
     return FALSE;
+  if (t->fallback.syn_axial_scale < 0 || t->fallback.syn_axial_scale > 10 ||
+      t->fallback.gauche_scale < 0 || t->fallback.gauche_scale > 10 ||
+      t->fallback.relative_sigma < 0 || t->fallback.relative_sigma > 10 ||
+      t->fallback.min_sigma < 0 || t->fallback.min_sigma > 10)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("%s: the scales and sigmas must lie within 0–10"), where);
+      return FALSE;
+    }
   t->fallback.rule = g_strdup (rule);
   return TRUE;
 }

@@ -167,27 +167,57 @@ cw_face_from_string (const char *s, CwFace *face)
   return TRUE;
 }
 
-/* The face of the single group on a carbon, or -1 when the carbon has none or two. */
+static int
+atomic_number (CwElement el)
+{
+  static const int z[CW_N_ELEMENTS] = {
+    [CW_EL_C] = 6, [CW_EL_H] = 1, [CW_EL_D] = 1, [CW_EL_BR] = 35, [CW_EL_CL] = 17,
+    [CW_EL_F] = 9, [CW_EL_HG] = 80, [CW_EL_I] = 53, [CW_EL_N] = 7, [CW_EL_O] = 8,
+    [CW_EL_S] = 16, [CW_EL_SI] = 14, [CW_EL_SN] = 50,
+  };
+  return el < CW_N_ELEMENTS ? z[el] : 0;
+}
+
+static double
+group_mass (const CwGroup *g)
+{
+  /* rough CIP tie-break: heavier group first (atomic numbers stand in for masses) */
+  double m = 0;
+
+  for (int k = 0; k < CW_N_ELEMENTS; k++)
+    m += g->elements[k] * atomic_number ((CwElement) k);
+  return m;
+}
+
+/* The face that defines a carbon's configuration: its single group's, or for two different
+ * groups the face of the one that ranks higher (first atom's atomic number, then the group's
+ * size: an approximation of CIP priority). -1 when the carbon has no group or two alike. */
 static int
 single_face (const CwMolecule *mol, int position)
 {
-  int face = -1, n = 0;
+  const CwSubstituent *found[2] = { NULL, NULL };
+  int n = 0;
 
-  for (int i = 0; i < mol->n_subs; i++)
+  for (int i = 0; i < mol->n_subs && n < 2; i++)
     if (mol->subs[i].position == position)
-      {
-        face = mol->subs[i].face;
-        n++;
-      }
-  return n == 1 ? face : -1;
+      found[n++] = &mol->subs[i];
+  if (n == 1)
+    return found[0]->face;
+  if (n == 2 && found[0]->group != found[1]->group)
+    {
+      const CwGroup *a = found[0]->group, *b = found[1]->group;
+      int za = atomic_number (a->first_atom), zb = atomic_number (b->first_atom);
+      gboolean a_first = za != zb ? za > zb : group_mass (a) >= group_mass (b);
+      return a_first ? found[0]->face : found[1]->face;
+    }
+  return -1;
 }
 
-char *
-cw_molecule_dup_configuration (const CwMolecule *mol)
+void
+cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
 {
   int faces[CW_RING_SIZE + 1];
   int n = 0, ref = -1;
-  GString *s;
 
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
@@ -200,16 +230,31 @@ cw_molecule_dup_configuration (const CwMolecule *mol)
         }
     }
   if (n < 2)
-    return g_strdup ("");
+    return;
   if (n == 2)
-    for (int p = ref + 1; p <= CW_RING_SIZE; p++)
-      if (faces[p] >= 0)
-        return g_strdup (faces[p] == faces[ref] ? "cis" : "trans");
-  s = g_string_new (NULL);
-  g_string_append_printf (s, "r-%d", ref);
+    {
+      for (int p = ref + 1; p <= CW_RING_SIZE; p++)
+        if (faces[p] >= 0)
+          g_string_append (out, faces[p] == faces[ref] ? "cis" : "trans");
+      return;
+    }
+  /* no printf: batch runs call this once a compound */
+  g_string_append (out, "r-");
+  g_string_append_c (out, (char) ('0' + ref));
   for (int p = ref + 1; p <= CW_RING_SIZE; p++)
     if (faces[p] >= 0)
-      g_string_append_printf (s, ", %c-%d", faces[p] == faces[ref] ? 'c' : 't', p);
+      {
+        g_string_append (out, faces[p] == faces[ref] ? ", c-" : ", t-");
+        g_string_append_c (out, (char) ('0' + p));
+      }
+}
+
+char *
+cw_molecule_dup_configuration (const CwMolecule *mol)
+{
+  GString *s = g_string_new (NULL);
+
+  cw_molecule_append_configuration (mol, s);
   return g_string_free (s, FALSE);
 }
 

@@ -41,9 +41,11 @@ const CwSubstituent *cw_molecule_get (const CwMolecule *mol, int position, CwFac
 const CwGroup *cw_molecule_add_custom_group (CwMolecule *mol, CwGroup *group);
 const CwGroup *cw_molecule_find_custom_group (const CwMolecule *mol, const char *id);
 
-/* Relative configuration: "cis", "trans", or r/c/t descriptors "r-1,c-3,t-4"; "" when fewer than two
- * substituted carbons carry a single group each. Newly allocated. */
+/* Relative configuration: "cis", "trans", or r/c/t descriptors "r-1, c-3, t-4"; "" when fewer than
+ * two carbons are stereogenic. On a carbon with two different groups the higher-ranking one (first
+ * atom's atomic number, then size) gives the face. Newly allocated. */
 char       *cw_molecule_dup_configuration (const CwMolecule *mol);
+void        cw_molecule_append_configuration (const CwMolecule *mol, GString *out);
 /* Inline ring spec of our own: "1u=methyl 3d=Cl", see cw-molecule.c. */
 CwMolecule *cw_molecule_new_from_spec (const char *spec, const CwGroupTable *table, GError **error);
 char       *cw_molecule_dup_spec (const CwMolecule *mol);

@@ -182,36 +182,5 @@ cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 
 void
 cw_sm_append_configuration (const CwMolecule *mol, GString *out)
 {
-  int faces[CW_RING_SIZE + 1], count[CW_RING_SIZE + 1] = { 0 };
-  int n = 0, ref = -1;
-
-  for (int i = 0; i < mol->n_subs; i++)
-    {
-      count[mol->subs[i].position]++;
-      faces[mol->subs[i].position] = mol->subs[i].face;
-    }
-  for (int p = 1; p <= CW_RING_SIZE; p++)
-    if (count[p] == 1)
-      {
-        n++;
-        if (ref < 0)
-          ref = p;
-      }
-  if (n < 2)
-    return;
-  if (n == 2)
-    {
-      for (int p = ref + 1; p <= CW_RING_SIZE; p++)
-        if (count[p] == 1)
-          g_string_append (out, faces[p] == faces[ref] ? "cis" : "trans");
-      return;
-    }
-  g_string_append (out, "r-");
-  g_string_append_c (out, '0' + ref);
-  for (int p = ref + 1; p <= CW_RING_SIZE; p++)
-    if (count[p] == 1)
-      {
-        g_string_append (out, faces[p] == faces[ref] ? ", c-" : ", t-");
-        g_string_append_c (out, '0' + p);
-      }
+  cw_molecule_append_configuration (mol, out);
 }

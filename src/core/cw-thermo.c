@@ -90,10 +90,17 @@ cw_check_temperature (double kelvin, GError **error)
                    _("Temperature %.6g K is at or below absolute zero"), kelvin);
       return FALSE;
     }
+  if (kelvin < CW_T_MIN)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("Temperature %.10g K is below %.0f K, outside what the model covers"),
+                   kelvin, CW_T_MIN);
+      return FALSE;
+    }
   if (kelvin > CW_T_MAX)
     {
       g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                   _("Temperature %.6g K is above %.0f K, outside what the model covers"),
+                   _("Temperature %.10g K is above %.0f K, outside what the model covers"),
                    kelvin, CW_T_MAX);
       return FALSE;
     }

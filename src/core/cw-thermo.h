@@ -12,6 +12,7 @@ G_BEGIN_DECLS
 #define CW_J_PER_CAL     4.184              /* thermochemical calorie, exact */
 #define CW_R_KCAL        (CW_R_J / CW_J_PER_CAL / 1000.0) /* kcal/(mol K) */
 #define CW_ZERO_C        273.15
+#define CW_T_MIN         1.0                /* K; below this R·T underflows and nothing is meant */
 #define CW_T_MAX         1000.0             /* the model is not meant above this */
 
 typedef enum
@@ -35,7 +36,7 @@ double   cw_energy_from_kcal (double kcal, CwEnergyUnit unit);
 double   cw_energy_to_kcal (double value, CwEnergyUnit unit);
 const char *cw_energy_unit_symbol (CwEnergyUnit unit); /* "kcal/mol" or "kJ/mol" */
 gboolean cw_energy_unit_from_string (const char *s, CwEnergyUnit *unit);
-/* "25C", "25 °C", "298.15K", "-78 °C", "298" (kelvin when no unit). Rejects T <= 0 K,
+/* "25C", "25 °C", "298.15K", "-78 °C", "298" (kelvin when no unit). Rejects T < 1 K,
  * T > CW_T_MAX, NaN and junk with a message naming the text. unit_out may be NULL. */
 gboolean cw_parse_temperature (const char *text, double *kelvin, CwTemperatureUnit *unit_out, GError **error);
 gboolean cw_check_temperature (double kelvin, GError **error);

@@ -198,6 +198,23 @@ test_terms_sum (void)
   g_assert_cmpfloat_with_epsilon (an.pop[0] + an.pop[1], 1.0, 1e-12);
 }
 
+/* Rates never exceed the Eyring prefactor kB·T/h (CODATA 2018), however strained a chair is. */
+static void
+test_rate_ceiling (void)
+{
+  const double temps[] = { 1, 77, 298.15, 1000 };
+  CwAnalysis an;
+
+  for (gsize i = 0; i < G_N_ELEMENTS (temps); i++)
+    {
+      double ceiling = CW_KB * temps[i] / CW_H_PLANCK;
+      test_analyze (data, "1u=tert-butyl 3u=tert-butyl 5u=tert-butyl", temps[i], &an);
+      g_assert_cmpfloat (an.k_forward, <=, ceiling * (1 + 1e-12));
+      g_assert_cmpfloat (an.k_reverse, <=, ceiling * (1 + 1e-12));
+      g_assert_cmpfloat (an.barrier, >=, fabs (an.delta_g));
+    }
+}
+
 static void
 test_bad_input (void)
 {
@@ -240,6 +257,7 @@ main (int argc, char **argv)
   g_test_add_func ("/core/analysis/additivity-flags", test_additivity_flags);
   g_test_add_func ("/core/analysis/twist-boat", test_twist_boat_flag);
   g_test_add_func ("/core/analysis/terms-sum", test_terms_sum);
+  g_test_add_func ("/core/analysis/rate-ceiling", test_rate_ceiling);
   g_test_add_func ("/core/analysis/bad-input", test_bad_input);
   ret = g_test_run ();
   cw_data_free (data);

@@ -139,7 +139,7 @@ static const BadCase bad_cases[] = {
     { "“temperature_k”", "-40" } },
   { "T just above 1000 K", HEAD "\"temperature_k\":1000.001,\"substituents\":[]}", CW_CORE_ERROR_INVALID,
     { "“temperature_k”", "1000" } },
-  { "T 1e6 K", HEAD "\"temperature_k\":1e6,\"substituents\":[]}", CW_CORE_ERROR_INVALID, { "“temperature_k”", "1e+06" } },
+  { "T 1e6 K", HEAD "\"temperature_k\":1e6,\"substituents\":[]}", CW_CORE_ERROR_INVALID, { "“temperature_k”", "1000000" } },
   /* enumerations */
   { "face sideways", HEAD "\"substituents\":[" SUB ("2", "sideways", "methyl") "]}", CW_CORE_ERROR_INVALID,
     { "substituent 1", "“sideways”" } },

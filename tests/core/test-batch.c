@@ -214,7 +214,7 @@ max_rss_kb (void)
 }
 
 /* Streaming: ten times the input does not raise the high-water mark of memory. */
-static void
+static void G_GNUC_UNUSED
 test_memory_flat (void)
 {
   cookie_io_functions_t io = { source_read, NULL, NULL, NULL };
@@ -254,7 +254,11 @@ main (int argc, char **argv)
   g_test_add_func ("/core/batch/csv-input", test_csv_input);
   g_test_add_func ("/core/batch/json", test_json);
   g_test_add_func ("/core/batch/stream", test_stream);
+  /* AddressSanitizer keeps freed memory in quarantine, so resident size grows by design there;
+   * the check runs in every other build */
+#if !defined(__SANITIZE_ADDRESS__)
   g_test_add_func ("/core/batch/memory-flat", test_memory_flat);
+#endif
   status = g_test_run ();
   cw_data_free (data);
   return status;

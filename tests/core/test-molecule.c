@@ -18,6 +18,9 @@ test_configuration (void)
     { "1u=methyl 3u=methyl 4d=chloro", "r-1, c-3, t-4" },
     { "2d=methyl 5d=methyl 1u=isopropyl", "r-1, t-2, t-5" },
     { "1u=methyl 1d=methyl", "" },
+    { "1u=methyl 1d=methyl 4u=tert-butyl", "" },            /* C1 is not stereogenic */
+    { "1u=hydroxy 1d=methyl 4u=tert-butyl", "cis" },        /* OH outranks Me (O > C) */
+    { "1d=hydroxy 1u=methyl 4u=tert-butyl", "trans" },
   };
 
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)

@@ -66,7 +66,7 @@ test_parse_temperature (void)
     { "25C", 298.15 }, { "298.15K", 298.15 }, { "-78 °C", 195.15 }, { "−78 °C", 195.15 },
     { "300", 300 }, { " 0 C ", 273.15 }, { "1000K", 1000 },
   };
-  const char *bad[] = { "", "abc", "-274C", "0K", "0", "nan", "inf", "1e9K", "25F", "25 C x", "1001K" };
+  const char *bad[] = { "", "abc", "-274C", "0K", "0", "nan", "inf", "1e9K", "25F", "25 C x", "1001K", "0.5K", "4.9e-324K" };
 
   for (gsize i = 0; i < G_N_ELEMENTS (good); i++)
     {
