@@ -1,6 +1,7 @@
 #include "config.h"
 
 #include "cw-couplings.h"
+#include "cw-thermo.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -260,13 +261,8 @@ cw_couplings_compute (const CwGeometryData *gd,
                    _("Unknown Karplus parameter set “%s”"), set_id);
       return FALSE;
     }
-  if (!isfinite (pop[0]) || !isfinite (pop[1]) || pop[0] < 0 || pop[1] < 0 ||
-      fabs (pop[0] + pop[1] - 1.0) > 1e-6)
-    {
-      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                   _("Chair populations %g and %g do not add up to 1"), pop[0], pop[1]);
-      return FALSE;
-    }
+  if (!cw_check_populations (pop, error))
+    return FALSE;
   memset (out, 0, sizeof *out);
   out->temperature = temperature;
   out->pop[0] = pop[0];

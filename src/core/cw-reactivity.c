@@ -8,6 +8,7 @@
 
 #include "cw-core-error.h"
 #include "cw-fragment.h"
+#include "cw-thermo.h"
 
 static int
 ring_neighbour (int position, int step)
@@ -230,13 +231,8 @@ cw_reactivity_compute (const CwGeometryData *gd,
                        GError              **error)
 {
   g_return_val_if_fail (gd != NULL && mol != NULL && pop != NULL && out != NULL, FALSE);
-  if (!isfinite (pop[0]) || !isfinite (pop[1]) || pop[0] < 0 || pop[1] < 0 ||
-      fabs (pop[0] + pop[1] - 1.0) > 1e-6)
-    {
-      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
-                   _("Chair populations %g and %g do not add up to 1"), pop[0], pop[1]);
-      return FALSE;
-    }
+  if (!cw_check_populations (pop, error))
+    return FALSE;
   memset (out, 0, sizeof *out);
   out->temperature = temperature;
   out->pop[0] = pop[0];

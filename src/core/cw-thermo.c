@@ -184,3 +184,16 @@ cw_format_temperature (double kelvin, CwTemperatureUnit unit)
     return g_strdup_printf ("%.1f °C", kelvin - CW_ZERO_C);
   return g_strdup_printf ("%.2f K", kelvin);
 }
+
+gboolean
+cw_check_populations (const double pop[2], GError **error)
+{
+  if (!isfinite (pop[0]) || !isfinite (pop[1]) || pop[0] < 0 || pop[1] < 0 ||
+      fabs (pop[0] + pop[1] - 1.0) > 1e-6)
+    {
+      g_set_error (error, CW_CORE_ERROR, CW_CORE_ERROR_INVALID,
+                   _("Chair populations %g and %g do not add up to 1"), pop[0], pop[1]);
+      return FALSE;
+    }
+  return TRUE;
+}

@@ -40,6 +40,8 @@ gboolean cw_energy_unit_from_string (const char *s, CwEnergyUnit *unit);
  * T > CW_T_MAX, NaN and junk with a message naming the text. unit_out may be NULL. */
 gboolean cw_parse_temperature (const char *text, double *kelvin, CwTemperatureUnit *unit_out, GError **error);
 gboolean cw_check_temperature (double kelvin, GError **error);
+/* Two finite, non-negative fractions that add up to 1 (within 1e-6). */
+gboolean cw_check_populations (const double pop[2], GError **error);
 char    *cw_format_temperature (double kelvin, CwTemperatureUnit unit);
 
 G_END_DECLS

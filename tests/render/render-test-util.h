@@ -7,28 +7,11 @@
 
 #include "cw-figures.h"
 #include "cw-render.h"
+#include "../core/test-helpers.h"
 
-static inline CwData *
-rt_load_data (void)
-{
-  g_autoptr (GError) error = NULL;
-  CwData *data = cw_data_new_from_dir (NULL, &error);
-
-  g_assert_no_error (error);
-  g_assert_nonnull (data);
-  return data;
-}
-
-static inline CwMolecule *
-rt_ring (const CwData *data, const char *spec)
-{
-  g_autoptr (GError) error = NULL;
-  CwMolecule *mol = cw_molecule_new_from_spec (spec, data->groups, &error);
-
-  g_assert_no_error (error);
-  g_assert_nonnull (mol);
-  return mol;
-}
+/* the same set-up as the core tests */
+#define rt_load_data test_load_data
+#define rt_ring test_ring
 
 static inline void
 rt_analyze (const CwData *data, const CwMolecule *mol, double kelvin, CwAnalysis *an)
