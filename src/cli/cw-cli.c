@@ -1,5 +1,6 @@
 #include "config.h"
 
+#include <gmodule.h>
 #include <glib/gi18n.h>
 #include <errno.h>
 #include <locale.h>
@@ -8,14 +9,62 @@
 
 #include "cw-cli.h"
 
+/* draw and report run from the chairwise-calc-render module, found beside the program (a build
+ * tree), in CHAIRWISE_MODULEDIR, or where it is installed. */
+static int
+run_from_module (const char *symbol, int argc, char **argv)
+{
+  g_autofree char *self = g_file_read_link ("/proc/self/exe", NULL);
+  g_autofree char *here = self ? g_path_get_dirname (self) : g_strdup (".");
+  const char *dirs[] = { g_getenv ("CHAIRWISE_MODULEDIR"), here, CW_CLI_MODULEDIR };
+  g_autofree char *last_error = NULL;
+  CwCliRun run = NULL;
+
+  for (gsize i = 0; i < G_N_ELEMENTS (dirs); i++)
+    {
+      g_autofree char *path = NULL;
+      GModule *module;
+
+      if (dirs[i] == NULL || *dirs[i] == '\0')
+        continue;
+      path = g_module_build_path (dirs[i], "chairwise-calc-render");
+      if (!g_file_test (path, G_FILE_TEST_EXISTS))
+        continue;
+      module = g_module_open (path, G_MODULE_BIND_LOCAL);
+      if (module == NULL)
+        {
+          g_free (last_error);
+          last_error = g_strdup (g_module_error ());
+          continue;
+        }
+      if (g_module_symbol (module, symbol, (gpointer *) &run) && run != NULL)
+        return run (argc, argv); /* the module stays loaded until exit */
+      g_module_close (module);
+    }
+  return cw_cli_error (argv[0], CW_EXIT_ANALYSIS, _("the drawing module is missing or broken (%s)"),
+                       last_error ? last_error : "libchairwise-calc-render.so not found");
+}
+
+static int
+run_draw (int argc, char **argv)
+{
+  return run_from_module ("cw_cli_draw", argc, argv);
+}
+
+static int
+run_report (int argc, char **argv)
+{
+  return run_from_module ("cw_cli_report", argc, argv);
+}
+
 static const CwCliCommand commands[] = {
   { "analyze", N_("Both chairs, every term, ΔG°, K and populations"), cw_cli_analyze },
   { "scan", N_("Chair populations against temperature (CSV)"), cw_cli_scan },
   { "groups", N_("The substituent table with A-values and sources"), cw_cli_groups },
   { "isomers", N_("Every cis/trans isomer with its free energy and equilibrium share"), cw_cli_isomers },
   { "batch", N_("Analyse a file of SMILES (one compound a line) to CSV or JSON"), cw_cli_batch },
-  { "draw", N_("Draw a figure to PNG, SVG or PDF"), cw_cli_draw },
-  { "report", N_("The one-page PDF report"), cw_cli_report },
+  { "draw", N_("Draw a figure to PNG, SVG or PDF"), run_draw },
+  { "report", N_("The one-page PDF report"), run_report },
   { "geometry", N_("3D coordinates of a chair as XYZ"), cw_cli_geometry },
   { "couplings", N_("Predicted vicinal couplings, and populations from a measured one"), cw_cli_couplings },
   { "reactivity", N_("Anti-periplanar checks for E2 and trans-diaxial reactions"), cw_cli_reactivity },

@@ -1,6 +1,7 @@
 #pragma once
 
 #include <glib.h>
+#include <gmodule.h>
 
 #include "cw-core.h"
 
@@ -54,8 +55,9 @@ int         cw_cli_usage_error (GOptionContext *context, const char *command, co
 int cw_cli_analyze (int argc, char **argv);
 int cw_cli_scan (int argc, char **argv);
 int cw_cli_groups (int argc, char **argv);
-int cw_cli_draw (int argc, char **argv);   /* cw-cli-draw.c */
-int cw_cli_report (int argc, char **argv); /* cw-cli-draw.c */
+/* cw-cli-draw.c, built as the chairwise-calc-render module (exported for g_module_symbol) */
+G_MODULE_EXPORT int cw_cli_draw (int argc, char **argv);
+G_MODULE_EXPORT int cw_cli_report (int argc, char **argv);
 int cw_cli_geometry (int argc, char **argv);   /* cw-cli-nmr.c */
 int cw_cli_couplings (int argc, char **argv);  /* cw-cli-nmr.c */
 int cw_cli_reactivity (int argc, char **argv); /* cw-cli-reactivity.c */
