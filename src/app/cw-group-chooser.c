@@ -25,6 +25,7 @@ struct _CwGroupChooser
   CwEnergyUnit   unit;
   const CwGroup *shown; /* what the button shows, to skip redundant updates */
   gboolean       shown_valid;
+  gboolean       list_attached; /* the list view has its model (from the first popup on) */
 };
 
 G_DEFINE_FINAL_TYPE (CwGroupChooser, cw_group_chooser, GTK_TYPE_WIDGET)
@@ -46,6 +47,24 @@ cw_group_chooser_dup_value_text (const CwGroup *group,
 
   /* TRANSLATORS: an A-value with its uncertainty and unit, e.g. "A 1.74 ± 0.05 kcal/mol" */
   return g_strdup_printf (_("A %.2f ± %.2f %s"), a, s, cw_energy_unit_symbol (unit));
+}
+
+/* Tooltips are answered on demand: gtk_widget_set_tooltip_text asks the X server where the
+ * pointer is each time, a round trip per row and per edit. */
+static gboolean
+label_text_tooltip_cb (GtkWidget  *widget,
+                       int         x,
+                       int         y,
+                       gboolean    keyboard,
+                       GtkTooltip *tooltip,
+                       GtkLabel   *label)
+{
+  const char *text = gtk_label_get_text (label);
+
+  if (text == NULL || *text == '\0')
+    return FALSE;
+  gtk_tooltip_set_text (tooltip, text);
+  return TRUE;
 }
 
 static void
@@ -72,6 +91,8 @@ setup_row_cb (GtkSignalListItemFactory *factory,
   gtk_box_append (GTK_BOX (top), value);
   gtk_box_append (GTK_BOX (box), top);
   gtk_box_append (GTK_BOX (box), source);
+  gtk_widget_set_has_tooltip (box, TRUE);
+  g_signal_connect (box, "query-tooltip", G_CALLBACK (label_text_tooltip_cb), source);
   gtk_list_item_set_child (item, box);
 }
 
@@ -99,7 +120,6 @@ bind_row_cb (GtkSignalListItemFactory *factory,
   gtk_label_set_text (GTK_LABEL (value), value_text);
   source_text = g_strdup (g->source ? g->source : _("no source given"));
   gtk_label_set_text (GTK_LABEL (source), source_text);
-  gtk_widget_set_tooltip_text (box, source_text);
 }
 
 static void
@@ -151,9 +171,21 @@ search_stop_cb (CwGroupChooser *self)
   gtk_popover_popdown (self->popover);
 }
 
+/* The list's rows are made on the first popup, not with the window: most windows never
+ * open both choosers, and each costs a few ms of row widgets at start-up. */
+static void
+attach_list (CwGroupChooser *self)
+{
+  if (self->list_attached)
+    return;
+  self->list_attached = TRUE;
+  gtk_list_view_set_model (self->list_view, GTK_SELECTION_MODEL (self->selection));
+}
+
 static void
 popover_show_cb (CwGroupChooser *self)
 {
+  attach_list (self);
   gtk_widget_grab_focus (GTK_WIDGET (self->search_entry));
 }
 
@@ -209,6 +241,23 @@ cw_group_chooser_grab_focus (GtkWidget *widget)
   return gtk_widget_grab_focus (GTK_WIDGET (CW_GROUP_CHOOSER (widget)->button));
 }
 
+/* The button's tooltip: the shown group's source, asked for only when a tooltip is due. */
+static gboolean
+button_tooltip_cb (GtkWidget      *widget,
+                   int             x,
+                   int             y,
+                   gboolean        keyboard,
+                   GtkTooltip     *tooltip,
+                   CwGroupChooser *self)
+{
+  if (!self->shown_valid)
+    return FALSE;
+  gtk_tooltip_set_text (tooltip, self->shown == NULL ? _("No group: choose one")
+                      : self->shown->source ? self->shown->source
+                                            : _("no source given"));
+  return TRUE;
+}
+
 static void
 cw_group_chooser_class_init (CwGroupChooserClass *klass)
 {
@@ -252,8 +301,9 @@ cw_group_chooser_init (CwGroupChooser *self)
   self->filtered = gtk_filter_list_model_new (NULL, g_object_ref (GTK_FILTER (self->filter)));
   self->selection = gtk_single_selection_new (g_object_ref (G_LIST_MODEL (self->filtered)));
   gtk_single_selection_set_autoselect (self->selection, TRUE);
-  gtk_list_view_set_model (self->list_view, GTK_SELECTION_MODEL (self->selection));
 
+  gtk_widget_set_has_tooltip (GTK_WIDGET (self->button), TRUE);
+  g_signal_connect (self->button, "query-tooltip", G_CALLBACK (button_tooltip_cb), self);
   g_signal_connect (factory, "setup", G_CALLBACK (setup_row_cb), NULL);
   g_signal_connect (factory, "bind", G_CALLBACK (bind_row_cb), self);
   gtk_list_view_set_factory (self->list_view, factory);
@@ -297,7 +347,8 @@ cw_group_chooser_set_group (CwGroupChooser *self,
   if (group == NULL)
     {
       gtk_label_set_text (self->button_label, _("None"));
-      gtk_widget_set_tooltip_text (GTK_WIDGET (self->button), _("No group: choose one"));
+      gtk_accessible_update_property (GTK_ACCESSIBLE (self->button), GTK_ACCESSIBLE_PROPERTY_DESCRIPTION,
+                                      _("No group: choose one"), -1);
       return;
     }
   value = g_strdup_printf (_("A %.2f %s"), cw_energy_from_kcal (group->a, self->unit),
@@ -306,7 +357,8 @@ cw_group_chooser_set_group (CwGroupChooser *self,
   escaped = g_markup_escape_text (group->label, -1);
   markup = g_strdup_printf ("<b>%s</b>  %s", escaped, value);
   gtk_label_set_markup (self->button_label, markup);
-  gtk_widget_set_tooltip_text (GTK_WIDGET (self->button), group->source);
+  gtk_accessible_update_property (GTK_ACCESSIBLE (self->button), GTK_ACCESSIBLE_PROPERTY_DESCRIPTION,
+                                  group->source ? group->source : "", -1);
 }
 
 void
@@ -318,8 +370,11 @@ cw_group_chooser_set_energy_unit (CwGroupChooser *self,
   self->unit = unit;
   self->shown_valid = FALSE;
   /* Rebind the visible rows so their values follow the unit. */
-  gtk_list_view_set_model (self->list_view, NULL);
-  gtk_list_view_set_model (self->list_view, GTK_SELECTION_MODEL (self->selection));
+  if (self->list_attached)
+    {
+      gtk_list_view_set_model (self->list_view, NULL);
+      gtk_list_view_set_model (self->list_view, GTK_SELECTION_MODEL (self->selection));
+    }
 }
 
 void
@@ -328,6 +383,7 @@ cw_group_chooser_popup (CwGroupChooser *self,
 {
   g_return_if_fail (CW_IS_GROUP_CHOOSER (self));
 
+  attach_list (self);
   gtk_menu_button_popup (self->button);
   gtk_editable_set_text (GTK_EDITABLE (self->search_entry), search_text ? search_text : "");
   gtk_editable_set_position (GTK_EDITABLE (self->search_entry), -1);

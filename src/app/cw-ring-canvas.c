@@ -439,12 +439,36 @@ cw_ring_canvas_new (void)
   return g_object_new (CW_TYPE_RING_CANVAS, NULL);
 }
 
+/* Whether the canvas would draw b just as it draws a (same groups, by label, on the same slots). */
+static gboolean
+same_ring (const CwMolecule *a,
+           const CwMolecule *b)
+{
+  if (a == NULL || b == NULL)
+    return a == b;
+  if (a->n_subs != b->n_subs)
+    return FALSE;
+  for (int i = 0; i < a->n_subs; i++)
+    {
+      const CwSubstituent *x = &a->subs[i], *y = &b->subs[i];
+
+      if (x->position != y->position || x->face != y->face ||
+          g_strcmp0 (x->group->label, y->group->label) != 0 ||
+          g_strcmp0 (x->group->markup, y->group->markup) != 0 || x->group->custom != y->group->custom)
+        return FALSE;
+    }
+  return TRUE;
+}
+
 void
 cw_ring_canvas_set_molecule (CwRingCanvas     *self,
                              const CwMolecule *mol)
 {
   g_return_if_fail (CW_IS_RING_CANVAS (self));
 
+  /* A temperature or unit change leaves the ring as it is: nothing to redraw. */
+  if (same_ring (self->mol, mol))
+    return;
   g_clear_pointer (&self->mol, cw_molecule_free);
   if (mol != NULL)
     self->mol = cw_molecule_copy (mol);

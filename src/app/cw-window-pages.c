@@ -251,10 +251,10 @@ cw_window_open_isomer (CwWindow *self,
                        int       index,
                        GError  **error)
 {
-  const CwIsomer  *iso;
-  CwDocument      *doc;
-  CwWindow        *win;
-  const char      *title = cw_document_get_title (self->doc);
+  const CwIsomer *iso;
+  CwDocument     *doc;
+  CwWindow       *win;
+  const char     *title = cw_document_get_title (self->doc);
 
   if (self->isomers == NULL || index < 0 || (guint) index >= self->isomers->isomers->len)
     {
@@ -302,7 +302,7 @@ cw_window_update_pages (CwWindow *self)
   const char *page = gtk_stack_get_visible_child_name (self->lower_stack);
   gboolean    couplings = g_strcmp0 (page, "couplings") == 0;
   /* The reaction geometry is also needed while the chairs show it. */
-  gboolean    reactions = g_strcmp0 (page, "reactions") == 0 || gtk_check_button_get_active (self->reactivity_check);
+  gboolean reactions = g_strcmp0 (page, "reactions") == 0 || gtk_check_button_get_active (self->reactivity_check);
   g_autoptr (GError) error = NULL;
   const CwGeometryData *gd;
 

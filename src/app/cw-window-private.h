@@ -72,6 +72,7 @@ struct _CwWindow
   const CwData *data; /* process-wide, see cw-app-data.h */
   CwAnalysis    an;
   gboolean      an_valid;
+  gboolean      refreshed; /* widgets filled at least once (done at realize at the latest) */
   gboolean      reactivity_valid;
   guint         serial;
   guint         saved_serial;

@@ -97,6 +97,22 @@ update_flags (CwWindow *self)
 
 /* ---- terms table -------------------------------------------------------------------- */
 
+static gboolean
+source_tooltip_cb (GtkWidget  *widget,
+                   int         x,
+                   int         y,
+                   gboolean    keyboard,
+                   GtkTooltip *tooltip,
+                   gpointer    user_data)
+{
+  const char *text = gtk_label_get_text (GTK_LABEL (widget));
+
+  if (text == NULL || *text == '\0')
+    return FALSE;
+  gtk_tooltip_set_text (tooltip, text);
+  return TRUE;
+}
+
 static GtkLabel *
 term_cell (CwWindow *self,
            guint     row,
@@ -117,6 +133,8 @@ term_cell (CwWindow *self,
           gtk_widget_set_hexpand (label, TRUE);
           gtk_widget_add_css_class (label, "dim-label");
         }
+      if (c == 3)
+        g_signal_connect (label, "query-tooltip", G_CALLBACK (source_tooltip_cb), NULL);
       gtk_grid_attach (self->terms_grid, label, c, r, 1, 1);
       g_ptr_array_add (self->term_cells, label);
     }
@@ -137,12 +155,10 @@ set_row (CwWindow   *self,
       set_css_class (GTK_WIDGET (label), "cw-terms-header", heading);
       if (c == 3)
         {
+          /* The full source (the cell may be ellipsized), answered on demand in
+           * source_tooltip_cb: setting tooltip texts costs an X round trip each. */
           set_css_class (GTK_WIDGET (label), "dim-label", !heading);
-          const char *tip = heading ? NULL : texts[c];
-          const char *old = gtk_widget_get_tooltip_text (GTK_WIDGET (label));
-
-          if (g_strcmp0 (old, tip) != 0)
-            gtk_widget_set_tooltip_text (GTK_WIDGET (label), tip);
+          gtk_widget_set_has_tooltip (GTK_WIDGET (label), !heading);
         }
       gtk_widget_set_visible (GTK_WIDGET (label), TRUE);
     }

@@ -117,6 +117,7 @@ cw_window_refresh (CwWindow *self)
   CwConditions cond;
   guint        n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
 
+  self->refreshed = TRUE;
   cw_document_get_conditions (self->doc, &cond);
   g_clear_pointer (&self->analysis_error, g_free);
   self->an_valid = cw_analyze (self->data, mol, &cond, &self->an, &error);
@@ -338,6 +339,16 @@ cw_window_close_request_vfunc (GtkWindow *window)
 }
 
 static void
+cw_window_realize (GtkWidget *widget)
+{
+  CwWindow *self = CW_WINDOW (widget);
+
+  if (!self->refreshed)
+    cw_window_refresh (self);
+  GTK_WIDGET_CLASS (cw_window_parent_class)->realize (widget);
+}
+
+static void
 cw_window_dispose (GObject *object)
 {
   CwWindow *self = CW_WINDOW (object);
@@ -382,6 +393,7 @@ cw_window_class_init (CwWindowClass *klass)
   object_class->dispose = cw_window_dispose;
   object_class->finalize = cw_window_finalize;
   window_class->close_request = cw_window_close_request_vfunc;
+  widget_class->realize = cw_window_realize;
 
   g_type_ensure (CW_TYPE_RING_CANVAS);
   g_type_ensure (CW_TYPE_GROUP_CHOOSER);
@@ -494,7 +506,8 @@ cw_window_init (CwWindow *self)
   gtk_label_set_text (self->caution_label, cw_caution_text ());
 
   cw_window_file_init (self);
-  cw_window_refresh (self);
+  /* The first refresh waits for realize: a window opened with a document (the usual
+   * start) would otherwise analyse and fill everything twice before its first frame. */
   /* Start on the ring, so keys 1-6 and typing work at once. */
   gtk_window_set_focus (GTK_WINDOW (self), GTK_WIDGET (self->ring_canvas));
 }
@@ -542,6 +555,8 @@ const CwAnalysis *
 cw_window_get_analysis (CwWindow *self)
 {
   g_return_val_if_fail (CW_IS_WINDOW (self), NULL);
+  if (!self->refreshed)
+    cw_window_refresh (self);
   return self->an_valid ? &self->an : NULL;
 }
 

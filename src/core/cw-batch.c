@@ -614,7 +614,8 @@ progress (Batch *b, gboolean final)
     g_autofree char *errors = g_strdup_printf ("%" G_GUINT64_FORMAT, b->sum->errors);
 
     /* TRANSLATORS: progress: command, number of lines, number of errors */
-    fprintf (b->err, _("\r%s: %s lines, %s errors…"), b->opt->command, lines, errors);
+    fputc ('\r', b->err);
+    fprintf (b->err, _("%s: %s lines, %s errors…"), b->opt->command, lines, errors);
   }
   fflush (b->err);
 }
@@ -778,7 +779,7 @@ out:
 char *
 cw_batch_summary_dup_text (const CwBatchSummary *s)
 {
-  GString         *t = g_string_new (NULL);
+  GString *t = g_string_new (NULL);
   /* The numbers are formatted first: xgettext cannot see through G_GUINT64_FORMAT. */
   g_autofree char *compounds = g_strdup_printf ("%" G_GUINT64_FORMAT, s->compounds);
   g_autofree char *lines = g_strdup_printf ("%" G_GUINT64_FORMAT, s->lines);
@@ -788,7 +789,7 @@ cw_batch_summary_dup_text (const CwBatchSummary *s)
 
   /* TRANSLATORS: compounds, lines, analysed, rows, errors (all numbers) */
   g_string_append_printf (t, _("%s compounds in %s lines: %s analysed (%s rows), %s with errors"),
-                          compounds, lines, analysed, rows, errors);
+                                compounds, lines, analysed, rows, errors);
   if (s->expanded)
     {
       g_autofree char *n = g_strdup_printf ("%" G_GUINT64_FORMAT, s->expanded);

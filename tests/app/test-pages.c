@@ -216,8 +216,8 @@ chairs_pixels (CwWindow *win)
 static void
 test_reactivity_marks (void)
 {
-  CwWindow        *win = new_window ();
-  CwRenderOptions  opt;
+  CwWindow       *win = new_window ();
+  CwRenderOptions opt;
   g_autoptr (GBytes) plain = NULL;
   g_autoptr (GBytes) marked = NULL;
   g_autoptr (GBytes) again = NULL;

@@ -335,9 +335,9 @@ read_xyz (const char *path, char elements[][3], double xyz[][3], int max_atoms)
 {
   g_autofree char *contents = NULL;
   g_auto (GStrv) lines = NULL;
-  guint           n_lines;
-  int             n;
-  char           *end;
+  guint n_lines;
+  int   n;
+  char *end;
 
   g_assert_true (g_file_get_contents (path, &contents, NULL, NULL));
   lines = g_strsplit (contents, "\n", -1);
