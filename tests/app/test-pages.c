@@ -4,30 +4,13 @@
 #include <stdlib.h>
 
 #include "app-test-helpers.h"
-#include "cw-window-private.h"
+#include "app-test-window.h"
 
 /* Reference: A(Me) = 1.74 kcal/mol (Booth & Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255,
  * as tabulated at 298 K); textbook conformational analysis (Eliel, Wilen & Mander 1994, ch. 11):
  * cis-1,4-dimethylcyclohexane has two equal chairs (one Me axial in each), trans-1,4 has a
  * diequatorial chair favoured by about 2·A(Me). */
 
-static CwWindow *
-new_window (void)
-{
-  CwWindow *win = g_object_new (CW_TYPE_WINDOW, NULL);
-
-  gtk_window_present (GTK_WINDOW (win));
-  app_test_wait_mapped (GTK_WIDGET (win));
-  return win;
-}
-
-static void
-destroy_window (CwWindow *win)
-{
-  win->close_confirmed = TRUE;
-  gtk_window_destroy (GTK_WINDOW (win));
-  app_test_pump (20, NULL);
-}
 
 static const char *
 cell_text (GtkGrid *grid, int col, int row)

@@ -4,7 +4,7 @@
 
 #include "app-test-helpers.h"
 #include "cw-custom-group-dialog.h"
-#include "cw-window-private.h"
+#include "app-test-window.h"
 
 /* Reference values, independent of the core:
  * - A(Me) from Booth & Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255: axial -> equatorial
@@ -25,23 +25,6 @@ equatorial_fraction (double a, double t)
   return 1.0 / (1.0 + exp (-a / (R_KCAL * t)));
 }
 
-static CwWindow *
-new_window (void)
-{
-  CwWindow *win = g_object_new (CW_TYPE_WINDOW, NULL);
-
-  gtk_window_present (GTK_WINDOW (win));
-  app_test_wait_mapped (GTK_WIDGET (win));
-  return win;
-}
-
-static void
-destroy_window (CwWindow *win)
-{
-  win->close_confirmed = TRUE;
-  gtk_window_destroy (GTK_WINDOW (win));
-  app_test_pump (20, NULL);
-}
 
 static void
 set_group (CwWindow *win, int pos, const char *face, const char *id)

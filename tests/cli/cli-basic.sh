@@ -5,23 +5,9 @@
 set -u
 calc="$CHAIRWISE_CALC"
 demo="$CHAIRWISE_DATADIR/demo.json"
-fail=0
-n=0
-check () { # name, expected exit code, command...
-  name=$1; want=$2; shift 2
-  n=$((n + 1))
-  "$@" >/tmp/cw-cli-out.$$ 2>/tmp/cw-cli-err.$$
-  got=$?
-  if [ "$got" -ne "$want" ]; then
-    echo "not ok $n - $name (exit $got, wanted $want)"; cat /tmp/cw-cli-err.$$; fail=1
-  else
-    echo "ok $n - $name"
-  fi
-}
-contains () { # name, file, text
-  n=$((n + 1))
-  if grep -q -- "$3" "$2"; then echo "ok $n - $1"; else echo "not ok $n - $1: no '$3'"; cat "$2"; fail=1; fi
-}
+out=/tmp/cw-cli-out.$$
+err=/tmp/cw-cli-err.$$
+. "$(dirname "$0")/tap.sh"
 check "analyze demo" 0 "$calc" analyze "$demo"
 contains "caution in text output" /tmp/cw-cli-out.$$ "confirm by experiment"
 check "analyze --json" 0 "$calc" analyze --ring "1u=methyl" --json

@@ -10,23 +10,7 @@ calc="$CHAIRWISE_CALC"
 tmp=$(mktemp -d)
 out="$tmp/out"
 err="$tmp/err"
-fail=0
-n=0
-check () { # name, expected exit code, command...
-  name=$1; want=$2; shift 2
-  n=$((n + 1))
-  "$@" >"$out" 2>"$err"
-  got=$?
-  if [ "$got" -ne "$want" ]; then
-    echo "not ok $n - $name (exit $got, wanted $want)"; cat "$err"; fail=1
-  else
-    echo "ok $n - $name"
-  fi
-}
-contains () { # name, file, text
-  n=$((n + 1))
-  if grep -q -- "$3" "$2"; then echo "ok $n - $1"; else echo "not ok $n - $1: no '$3'"; cat "$2"; fail=1; fi
-}
+. "$(dirname "$0")/tap.sh"
 
 if "$calc" couplings --help 2>&1 | grep -q "unknown command"; then
   echo "1..0 # SKIP geometry/couplings/reactivity are not in the command table yet"

@@ -12,23 +12,9 @@ if ! "$calc" --help | grep -q "^  isomers" || ! "$calc" --help | grep -q "^  bat
   echo "Bail out! isomers/batch are missing from the chairwise-calc command list"
   exit 1
 fi
-fail=0
-n=0
-check () { # name, expected exit code, command...
-  name=$1; want=$2; shift 2
-  n=$((n + 1))
-  "$@" >"$tmp/out" 2>"$tmp/err"
-  got=$?
-  if [ "$got" -ne "$want" ]; then
-    echo "not ok $n - $name (exit $got, wanted $want)"; cat "$tmp/err"; fail=1
-  else
-    echo "ok $n - $name"
-  fi
-}
-contains () { # name, file, text
-  n=$((n + 1))
-  if grep -q -- "$3" "$2"; then echo "ok $n - $1"; else echo "not ok $n - $1: no '$3'"; cat "$2"; fail=1; fi
-}
+out="$tmp/out"
+err="$tmp/err"
+. "$(dirname "$0")/tap.sh"
 check "isomers 1,4-dimethyl" 0 "$calc" isomers --smiles 'CC1CCC(C)CC1'
 contains "trans first" "$tmp/out" "^1 *trans"
 contains "method stated" "$tmp/out" "Rotational symmetry numbers are not included"

@@ -327,13 +327,11 @@ test_averages (void)
 int
 main (int argc, char **argv)
 {
-  g_autoptr (GError) error = NULL;
   int ret;
 
   g_test_init (&argc, &argv, NULL);
   data = test_load_data ();
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   g_test_add_func ("/core/couplings/equation", test_equation);
   g_test_add_func ("/core/couplings/cyclohexane", test_cyclohexane);
   g_test_add_func ("/core/couplings/tert-butylcyclohexanol", test_tert_butylcyclohexanol);

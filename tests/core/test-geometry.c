@@ -285,13 +285,11 @@ test_bad_edits (void)
 int
 main (int argc, char **argv)
 {
-  g_autoptr (GError) error = NULL;
   int ret;
 
   g_test_init (&argc, &argv, NULL);
   data = test_load_data ();
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   g_test_add_func ("/core/geometry/ring", test_ring_geometry);
   g_test_add_func ("/core/geometry/hydrogens", test_hydrogens);
   g_test_add_func ("/core/geometry/inversion", test_inversion);

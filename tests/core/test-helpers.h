@@ -34,3 +34,14 @@ test_analyze (const CwData *data, const char *spec, double kelvin, CwAnalysis *a
   g_assert_true (cw_analyze (data, mol, &cond, an, &error));
   g_assert_no_error (error);
 }
+
+static inline CwGeometryData *
+test_load_geometry (void)
+{
+  g_autoptr (GError) error = NULL;
+  CwGeometryData *gd = cw_geometry_data_new_from_dir (NULL, &error);
+
+  g_assert_no_error (error);
+  g_assert_nonnull (gd);
+  return gd;
+}

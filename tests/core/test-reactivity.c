@@ -206,13 +206,11 @@ test_exocyclic_and_none (void)
 int
 main (int argc, char **argv)
 {
-  g_autoptr (GError) error = NULL;
   int ret;
 
   g_test_init (&argc, &argv, NULL);
   data = test_load_data ();
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   g_test_add_func ("/core/reactivity/menthyl-chlorides", test_menthyl_chlorides);
   g_test_add_func ("/core/reactivity/beta-hexachloro", test_beta_hexachloro);
   g_test_add_func ("/core/reactivity/neighbouring", test_neighbouring);

@@ -261,13 +261,11 @@ test_stale (void)
 int
 main (int argc, char **argv)
 {
-  g_autoptr (GError) error = NULL;
   int ret;
 
   g_test_init (&argc, &argv, NULL);
   data = rt_load_data ();
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   g_test_add_func ("/render/chairs-reaction/marks", test_marks);
   g_test_add_func ("/render/chairs-reaction/one-group", test_one_group);
   g_test_add_func ("/render/chairs-reaction/stale", test_stale);

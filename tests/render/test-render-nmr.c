@@ -5,6 +5,7 @@
 #include "cw-geometry-data.h"
 #include "cw-render-nmr.h"
 #include "cw-render.h"
+#include "../core/test-helpers.h"
 
 static CwData         *data;
 static CwGeometryData *gd;
@@ -108,8 +109,7 @@ main (int argc, char **argv)
   g_test_init (&argc, &argv, NULL);
   data = cw_data_new_from_dir (NULL, &error);
   g_assert_no_error (error);
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   g_test_add_func ("/render/nmr/table", test_table);
   ret = g_test_run ();
   cw_geometry_data_free (gd);

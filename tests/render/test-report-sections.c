@@ -329,8 +329,7 @@ main (int argc, char **argv)
 
   g_test_init (&argc, &argv, NULL);
   data = rt_load_data ();
-  gd = cw_geometry_data_new_from_dir (NULL, &error);
-  g_assert_no_error (error);
+  gd = test_load_geometry ();
   tmpdir = g_dir_make_tmp ("cw-report-XXXXXX", &error);
   g_assert_no_error (error);
   g_test_add_func ("/render/report-sections/demo", test_demo);
