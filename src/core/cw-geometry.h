@@ -5,7 +5,7 @@
 
 G_BEGIN_DECLS
 
-/* Idealised 3D chairs (SCIENCE.md §1, §8).
+/* Idealised 3D chairs (DEVELOPERS.md, the model; docs/couplings-and-reactions.md).
  *
  * Frame: the ring's threefold axis is z; "up" (the up face of the flat drawing) is +z. Ring carbon
  * k (1..6) sits at azimuth 60°·(k − 1), counter-clockwise seen from +z, at radius r and height ±h

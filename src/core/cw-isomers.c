@@ -27,7 +27,7 @@ conformer_key (const CwMolecule *mol, int chair, const CwRingTransform *t, gint6
   for (int i = 0; i < mol->n_subs; i++)
     {
       const CwSubstituent *s = &mol->subs[i];
-      /* chair 1: odd carbons have their axial bond up (SCIENCE.md §1) */
+      /* chair 1: odd carbons have their axial bond up (DEVELOPERS.md, the model) */
       gboolean axial_up = (s->position % 2 == 1) == (chair == 0);
       gboolean axial = (s->face == CW_FACE_UP) == axial_up;
       slot[s->position][s->face == CW_FACE_UP ? 0 : 1] = cw_sm_group_rank (s->group) * 2 + axial;

@@ -128,7 +128,7 @@ test_couplings_page (void)
 
   /* tert-Butyl up on C1 is equatorial only in chair 2, which then holds nearly all molecules;
    * H-1 (down) is axial there: a triplet of triplets with J(ax,ax) of 10–13 Hz
-   * (common practice; SCIENCE.md §9). */
+   * (common practice; docs/couplings-and-reactions.md). */
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 1, "up", "tert-butyl");
   gtk_stack_set_visible_child_name (win->lower_stack, "couplings");
   app_test_pump (50, NULL);

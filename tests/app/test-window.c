@@ -51,7 +51,7 @@ test_edit_updates_results (void)
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
   g_assert_cmpstr (gtk_label_get_text (win->pop1_label), ==, "Chair 1: 50.0 % (50.0–50.0 %)");
 
-  /* Methyl on the up face of C1: axial in chair 1 (SCIENCE.md §1), equatorial in chair 2. */
+  /* Methyl on the up face of C1: axial in chair 1 (DEVELOPERS.md, the model), equatorial in chair 2. */
   set_group (win, 1, "up", "methyl");
   an = cw_window_get_analysis (win);
   g_assert_nonnull (an);

@@ -199,7 +199,7 @@ test_multiplet (void)
     }
 }
 
-/* The averaged-coupling method (Eliel; SCIENCE.md §9): J_obs = x1·J1 + x2·J2. Fed the averaged
+/* The averaged-coupling method (Eliel; docs/couplings-and-reactions.md): J_obs = x1·J1 + x2·J2. Fed the averaged
  * width of H-1 of cyclohexanol at the engine's populations, it must return the engine's ΔG°
  * (derived: the method inverts the forward average exactly). */
 static void

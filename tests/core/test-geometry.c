@@ -68,14 +68,14 @@ test_hydrogens (void)
       g_assert_cmpfloat_with_epsilon (cw_chair_geometry_distance (&g, c, eq), 1.093, 1e-9);
       g_assert_cmpfloat_with_epsilon (cw_chair_geometry_angle (&g, ax, c, eq), 109.47, 1e-6);
       g_assert_cmpfloat (acos (fabs (dz) / 1.098) * 180 / G_PI, <, 5.0);
-      /* odd carbons are axial up in chair 1 (SCIENCE.md §1) */
+      /* odd carbons are axial up in chair 1 (DEVELOPERS.md, the model) */
       g_assert_cmpint ((dz > 0), ==, (pos % 2 == 1));
       g_assert_cmpfloat (fabs (cw_chair_geometry_torsion (&g, eq, c, next, next2)), >, 170.0);
     }
 }
 
 /* Ring inversion swaps axial and equatorial and keeps faces: 1u-methyl is axial in chair 1 and
- * equatorial in chair 2 (SCIENCE.md §1); its first atom sits 1.530 Å from C1 (Csp3–Csp3, Allen
+ * equatorial in chair 2 (DEVELOPERS.md, the model); its first atom sits 1.530 Å from C1 (Csp3–Csp3, Allen
  * et al. 1987; from memory, unverified). */
 static void
 test_inversion (void)
