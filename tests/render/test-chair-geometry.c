@@ -5,7 +5,7 @@
 
 #include "cw-chair-geometry.h"
 
-/* Ideal tetrahedral angle, acos(−1/3) = 109.47° (common practice; SCIENCE.md §8). */
+/* Ideal tetrahedral angle, acos(−1/3) = 109.47° (common practice). */
 #define TETRAHEDRAL (acos (-1.0 / 3.0))
 
 static CwVec3
@@ -55,7 +55,7 @@ test_tetrahedral (void)
     }
 }
 
-/* For a D3d chair cos τ = −cos θ / (1 + cos θ) (SCIENCE.md §8, derived); with θ tetrahedral the
+/* For a D3d chair cos τ = −cos θ / (1 + cos θ) (derived; docs/render.md); with θ tetrahedral the
  * ring torsion is 60°, alternating in sign around the ring. */
 static void
 test_torsion (void)
@@ -78,7 +78,7 @@ test_torsion (void)
 }
 
 /* Chair 1 has the axial bonds of carbons 1, 3, 5 up; chair 2 is the ring-inverted form
- * (SCIENCE.md §1). Each equatorial bond leans to the other face by a third (tetrahedral). */
+ * (DEVELOPERS.md, the model). Each equatorial bond leans to the other face by a third (tetrahedral). */
 static void
 test_alternation (void)
 {

@@ -63,7 +63,7 @@ check_geometry (const CwScene *scene, const CwMolecule *mol, const CwAnalysis *a
       g_assert_true (p->axial == an->chair[p->chair].axial[p->sub]);
       cw_chair3d_build (&c3, p->chair);
       /* The engine's assignment agrees with the chair: axial bonds point to the face of their
-       * carbon's pucker, equatorial bonds to the other face (SCIENCE.md §1). */
+       * carbon's pucker, equatorial bonds to the other face (DEVELOPERS.md, the model). */
       if (p->axial)
         g_assert_true ((s->face == CW_FACE_UP) == c3.up[k]);
       else
@@ -147,7 +147,7 @@ test_molecules (void)
 
 /* cis-1,3-Dimethylcyclohexane: the diaxial chair carries U(Me,Me) − A(Me) = 3.7 − 1.74 =
  * 1.96 kcal/mol on its syn-axial mark (Allinger & Miller, J. Am. Chem. Soc. 1961, 83, 2145, from
- * memory, unverified; A(Me) from Booth & Everett 1980, SCIENCE.md §2), in kJ/mol 8.2. */
+ * memory, unverified; A(Me) from Booth & Everett 1980), in kJ/mol 8.2. */
 static void
 test_cis_13_mark (void)
 {

@@ -192,7 +192,7 @@ squash (const char *s)
 /* The report: one page of the requested paper, rasterises, and carries ΔG°, the populations,
  * the figures' words, the sources, the caution and the date. Methylcyclohexane: ΔG° = G(chair 2)
  * − G(chair 1) = −A(Me) = −1.74 kcal/mol (chair 1 has Me axial; A-value derived from Booth &
- * Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255; SCIENCE.md §1, §3), K = exp(1.74/RT) ≈ 18.9
+ * Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255), K = exp(1.74/RT) ≈ 18.9
  * at 298.15 K (CODATA R), so 5.0 % / 95.0 %. */
 static void
 test_report (Fixture *f, gconstpointer spec)

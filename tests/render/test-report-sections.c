@@ -154,7 +154,7 @@ test_demo (void)
 
 /* Menthyl chloride (Cl, iPr and Me all equatorial in the major chair): the CHCl proton is axial
  * with two axial neighbours, a triplet of doublets with the large coupling of J(ax,ax) 10–13 Hz
- * (SCIENCE.md §9, common practice). Only the chair with Cl axial can eliminate, and there only the
+ * (common practice). Only the chair with Cl axial can eliminate, and there only the
  * CH2 side has an axial β-H, so the only E2 alkene is the less substituted C2=C3 (2-menthene),
  * as found for menthyl chloride with ethoxide (Hughes, Ingold et al., J. Chem. Soc. 1948; from
  * memory of the textbook accounts, unverified). */
@@ -188,8 +188,8 @@ test_menthyl (void)
 
 /* Neomenthyl chloride (Cl axial in the major chair): both β carbons offer an axial H, and the more
  * substituted C1=C2 (3-menthene) is open, the major product found (same source as above). The
- * CHCl proton is equatorial there: only small couplings, J(ax,eq) and J(eq,eq) 2–5 Hz (SCIENCE.md
- * §9, common practice). */
+ * CHCl proton is equatorial there: only small couplings, J(ax,eq) and J(eq,eq) 2–5 Hz (common
+ * practice). */
 static void
 test_neomenthyl (void)
 {
@@ -235,7 +235,7 @@ test_deuterium (void)
 }
 
 /* A trans-vicinal bromide and methoxy group: anti-periplanar (diaxial) only in the chair with
- * both axial, the one the equatorial tert-butyl group holds (A-values, SCIENCE.md §3). */
+ * both axial, the one the equatorial tert-butyl group holds (A-values, data/groups.json). */
 static void
 test_pairs (void)
 {
