@@ -1,6 +1,7 @@
 #pragma once
 
 #include <glib.h>
+#include <string.h>
 
 #include "cw-molecule.h"
 
@@ -68,6 +69,30 @@ typedef struct
   char        text[CW_SM_FRAG_TEXT];
 } CwSmFragCacheEntry;
 
+/* The cache key of text[lo, hi) with the root atom at root_off, its slot, and whether an
+ * entry holds exactly that stretch; the general reader fills the cache and its fast path
+ * (cw-smiles-fast.c) reads it, so both must compute the same key. */
+static inline guint64
+cw_sm_frag_key (const char *text, int lo, int hi, int root_off)
+{
+  guint64 key = 0xcbf29ce484222325ull ^ (guint64) root_off;
+  for (int i = lo; i < hi; i++)
+    key = (key ^ (guchar) text[i]) * 0x100000001b3ull;
+  return key;
+}
+
+static inline CwSmFragCacheEntry *
+cw_sm_frag_slot (CwSmFragCacheEntry *cache, guint64 key)
+{
+  return &cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 1)];
+}
+
+static inline gboolean
+cw_sm_frag_entry_is (const CwSmFragCacheEntry *e, guint64 key, const char *text, int lo, int hi, int root_off)
+{
+  return e->key == key && e->len == hi - lo && e->root_off == root_off && memcmp (e->text, text + lo, hi - lo) == 0;
+}
+
 typedef struct
 {
   CwSmAtom            atoms[CW_SM_MAX_ATOMS];
@@ -80,6 +105,8 @@ typedef struct
   gboolean            fragment;   /* parsing a group fragment: the first atom has one more bond (to the ring) */
   int                 error_pos;  /* offset named by the last error, -1 */
   CwSmFragCacheEntry *frag_cache; /* CW_SM_FRAG_CACHE entries, or NULL */
+  gboolean            general_only; /* tests: never take the fast path */
+  guint64             n_fast;       /* readings done by the fast path */
 } CwSmGraph;
 
 /* cw-smiles-parse.c */
@@ -147,6 +174,8 @@ typedef struct
   const CwGroup     **groups;
   char              **fwd;
   char              **rev;
+  guint8             *fwd_len, *rev_len; /* strlen of fwd/rev (0 when NULL or longer than 255) */
+  guint8             *ring_inside;       /* the group's fragment has a ring that is not aromatic */
   guint64             slot_hash[CW_SM_INDEX_SLOTS];
   gint16              slot_group[CW_SM_INDEX_SLOTS];
   GString            *problems; /* groups whose fragment could not be read, one per line */
@@ -182,5 +211,8 @@ void cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GStrin
 /* The same for a molecule already numbered canonically (as the reader returns them). */
 void cw_sm_write_canonical (const CwMolecule *mol, const CwSmIndex *index, GString *out);
 void cw_sm_reader_write_canonical (CwSmilesReader *reader, const CwMolecule *mol, GString *out);
+/* Tests: read everything the general way (general_only), and count the fast path's readings. */
+void    cw_sm_reader_set_general_only (CwSmilesReader *reader, gboolean general_only);
+guint64 cw_sm_reader_get_n_fast (CwSmilesReader *reader);
 
 G_END_DECLS

@@ -12,30 +12,11 @@
 
 #include "cw-core-error.h"
 #include "cw-smiles-private.h"
+#include "cw-smiles-reading.h"
 #include "cw-smiles.h"
 
 #define MAX_ISOMER_TRIES 64
 
-typedef struct
-{
-  CwSmGraph       *g;
-  guint8          *mask;
-  const CwSmIndex *index;
-  gint16           comp[CW_SM_MAX_ATOMS];
-  gint16           depth[CW_SM_MAX_ATOMS];
-  guint32          member[CW_SM_MAX_ATOMS]; /* bit c: atom lies on cycle c */
-  int              cycle[CW_SM_MAX_CYCLES][CW_SM_MAX_ATOMS];
-  int              cycle_len[CW_SM_MAX_CYCLES];
-  int              n_cycles;
-  int              keep;               /* component kept */
-  int              ring[CW_RING_SIZE]; /* graph atoms, cyclic order */
-  int              n_subs;
-  int              sub_ring[CW_MAX_SUBS]; /* 0..5 */
-  int              sub_atom[CW_MAX_SUBS];
-  const CwGroup   *sub_group[CW_MAX_SUBS];
-  int              sub_face[CW_MAX_SUBS]; /* CwFace, or -1 when not written */
-  gboolean         inner_stereo;
-} Reading;
 
 /* ---- parts ---- */
 
@@ -422,12 +403,10 @@ lookup_fragment (Reading *r, int root, guint8 mark, const int *atoms, int n)
 
   if (g->frag_cache && fragment_span (r, mark, atoms, n, &lo, &hi))
     {
-      guint64 key = 0xcbf29ce484222325ull ^ (guint64) (g->atoms[root].pos - lo);
-      for (int i = lo; i < hi; i++)
-        key = (key ^ (guchar) g->text[i]) * 0x100000001b3ull;
-      e = &g->frag_cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 1)];
-      if (e->key == key && e->len == hi - lo && e->root_off == g->atoms[root].pos - lo &&
-          memcmp (e->text, g->text + lo, hi - lo) == 0)
+      int     root_off = g->atoms[root].pos - lo;
+      guint64 key = cw_sm_frag_key (g->text, lo, hi, root_off);
+      e = cw_sm_frag_slot (g->frag_cache, key);
+      if (cw_sm_frag_entry_is (e, key, g->text, lo, hi, root_off))
         return e->group;
       e->key = key;
       e->len = hi - lo;
@@ -608,8 +587,8 @@ canonicalize (CwMolecule *m, int n_relevant)
   m->n_subs = tmp.n_subs;
 }
 
-static int
-make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
+int
+cw_sm_make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
 {
   CwMolecule base;
   gboolean   relevant[CW_RING_SIZE + 1];
@@ -691,6 +670,15 @@ cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text
   info->n_dropped = 0;
   info->error_pos = -1;
   g->error_pos = -1;
+  if (g->frag_cache && !g->general_only)
+    {
+      int n = cw_sm_read_fast (index, g, text, len, out, max_out, info, notes);
+      if (n > 0)
+        {
+          g->n_fast++;
+          return n;
+        }
+    }
   if (!cw_sm_parse (g, text, len, FALSE, error))
     goto fail;
   choose_component (r, notes, info);
@@ -699,7 +687,7 @@ cw_sm_read (const CwSmIndex *index, CwSmGraph *g, guint8 *mask, const char *text
   if (!choose_ring (r, notes, error) || !cut_substituents (r, error))
     goto fail;
   read_faces (r);
-  info->n_molecules = make_molecules (r, out, max_out, info, notes, error);
+  info->n_molecules = cw_sm_make_molecules (r, out, max_out, info, notes, error);
   if (info->n_molecules < 0)
     goto fail;
   return info->n_molecules;

@@ -104,6 +104,9 @@ cw_sm_index_new (const CwGroupTable *table)
   index->groups = g_new0 (const CwGroup *, index->n_groups);
   index->fwd = g_new0 (char *, index->n_groups);
   index->rev = g_new0 (char *, index->n_groups);
+  index->fwd_len = g_new0 (guint8, index->n_groups);
+  index->rev_len = g_new0 (guint8, index->n_groups);
+  index->ring_inside = g_new0 (guint8, index->n_groups);
   index->problems = g_string_new (NULL);
   for (int k = 0; k < CW_SM_INDEX_SLOTS; k++)
     index->slot_group[k] = -1;
@@ -120,7 +123,13 @@ cw_sm_index_new (const CwGroupTable *table)
           g_string_append_printf (index->problems, _("group “%s”: %s\n"), group->id, error->message);
           continue;
         }
+      for (int c = 0; c < g->n_closures; c++)
+        index->ring_inside[i] |= !g->atoms[g->closures[c].a].aromatic || !g->atoms[g->closures[c].b].aromatic;
       fragment_strings (g, mask, 2, &index->fwd[i], &index->rev[i]);
+      if (index->fwd[i] && strlen (index->fwd[i]) < 256)
+        index->fwd_len[i] = strlen (index->fwd[i]);
+      if (index->rev[i] && strlen (index->rev[i]) < 256)
+        index->rev_len[i] = strlen (index->rev[i]);
       if (index->fwd[i] == NULL)
         g_string_append_printf (index->problems, _("group “%s”: its fragment cannot be written back\n"), group->id);
       h = fragment_hash (g, mask);
@@ -153,6 +162,9 @@ cw_sm_index_free (CwSmIndex *index)
     }
   g_free (index->fwd);
   g_free (index->rev);
+  g_free (index->fwd_len);
+  g_free (index->rev_len);
+  g_free (index->ring_inside);
   g_free (index->groups);
   g_string_free (index->problems, TRUE);
   g_free (index);
@@ -354,4 +366,16 @@ cw_smiles_write (const CwMolecule *mol)
   g_return_val_if_fail (mol != NULL, NULL);
   cw_sm_write_molecule (mol, NULL, s);
   return g_string_free (s, FALSE);
+}
+
+void
+cw_sm_reader_set_general_only (CwSmilesReader *reader, gboolean general_only)
+{
+  reader->graph.general_only = general_only;
+}
+
+guint64
+cw_sm_reader_get_n_fast (CwSmilesReader *reader)
+{
+  return reader->graph.n_fast;
 }

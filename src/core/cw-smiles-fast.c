@@ -1,0 +1,458 @@
+/* cw-smiles-fast.c: a fast path of the SMILES reader for simply written rings.
+ *
+ * Most SMILES of substituted cyclohexanes are written one way: the six ring carbons in one chain
+ * at the top level ("C1…C1", ring bond between the first and the sixth), each substituent either
+ * a branch of its ring carbon, the chain written before the ring or the chain after it. For those
+ * the ring, the substituents and the faces follow from one pass over the text, without building
+ * the molecular graph, as long as every substituent is a stretch of text the fragment cache
+ * already maps to a table group (the general reader, cw-smiles-read.c, fills that cache: the
+ * first compound with a given spelling of a group is read the general way).
+ *
+ * Anything else — a '.', bonds written next to the ring, ring carbons in branches, ring bonds
+ * joining two substituents or fusing rings, unknown or uncached fragments, groups that hold a
+ * non-aromatic ring (a second candidate ring), bracket ring carbons with isotopes or charges —
+ * returns 0 and the general reader reads the text from the start, with all its messages. The
+ * fast path never reports an error, and for what it accepts it gives exactly the general reader's
+ * molecules and notes (tests/core/test-smiles-fast.c compares the two). */
+#include "config.h"
+
+#include <string.h>
+
+#include "cw-smiles-private.h"
+#include "cw-smiles-reading.h"
+
+#define MAX_CHAIN 64
+#define MAX_BRANCH 64
+#define MAX_DIGITS 64
+
+enum
+{
+  RING_NOT_OK = 0, /* cannot be a ring carbon of the fast path */
+  RING_ORGANIC,    /* C */
+  RING_BRACKET     /* [C], [CH], [C@H], [C@@], … */
+};
+
+typedef struct
+{
+  guint16 pos, len;
+  guint8  kind;
+  guint8  chirality; /* CwSmChirality */
+  gint8   hcount;    /* bracket atoms */
+  guint8  bond_before;
+  guint8  has_at; /* '@' in its bracket */
+  guint8  n_branch, n_digit;
+  guint8  first_branch;
+} ChainAtom;
+
+typedef struct
+{
+  ChainAtom chain[MAX_CHAIN];
+  int       n_chain;
+  guint16   br_lo[MAX_BRANCH], br_hi[MAX_BRANCH]; /* text inside the parentheses */
+  guint8    br_owner[MAX_BRANCH], br_has_at[MAX_BRANCH];
+  int       n_branch;
+  guint8    dg_num[MAX_DIGITS];
+  gint16    dg_seg[MAX_DIGITS]; /* chain atom (>= 0) or -(branch + 1) */
+  guint8    dg_bond[MAX_DIGITS];
+  gint8     dg_pair[MAX_DIGITS];
+  int       n_digit;
+} Scan;
+
+static inline gboolean
+is_bond_char (char c)
+{
+  return c == '-' || c == '=' || c == '#' || c == '$' || c == ':' || c == '/' || c == '\\';
+}
+
+static inline gboolean
+is_atom_start (char c)
+{
+  return c == '[' || c == '*' || (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z');
+}
+
+/* The ']' closing the bracket atom opened at i, or -1; *at tells whether it holds '@'. */
+static inline int
+bracket_end (const char *s, int len, int i, gboolean *at)
+{
+  for (int j = i + 1; j < len; j++)
+    {
+      char c = s[j];
+      if (c == ']')
+        return j;
+      if (c == '@')
+        *at = TRUE;
+      else if (c == '[' || c == '(' || c == '.')
+        return -1;
+    }
+  return -1;
+}
+
+/* A bracket ring carbon: [C], optional @ or @@, optional H with one digit, nothing else. */
+static void
+read_ring_bracket (const char *s, int lo, int hi, ChainAtom *a)
+{
+  int i = lo + 1;
+
+  a->kind = RING_NOT_OK;
+  if (i >= hi || s[i] != 'C' || (i + 1 < hi && s[i + 1] == 'l'))
+    return;
+  i++;
+  a->chirality = CW_SM_CHIRAL_NONE;
+  if (i < hi && s[i] == '@')
+    {
+      a->chirality = CW_SM_CHIRAL_ANTICLOCKWISE, i++;
+      if (i < hi && s[i] == '@')
+        a->chirality = CW_SM_CHIRAL_CLOCKWISE, i++;
+    }
+  a->hcount = 0;
+  if (i < hi && s[i] == 'H')
+    {
+      i++;
+      a->hcount = 1;
+      if (i < hi && s[i] >= '0' && s[i] <= '9')
+        a->hcount = s[i++] - '0';
+    }
+  if (i == hi)
+    a->kind = RING_BRACKET;
+}
+
+static inline gboolean
+add_digit (Scan *sc, int num, int seg, gboolean bond)
+{
+  if (sc->n_digit >= MAX_DIGITS)
+    return FALSE;
+  sc->dg_num[sc->n_digit] = num;
+  sc->dg_seg[sc->n_digit] = seg;
+  sc->dg_bond[sc->n_digit] = bond;
+  sc->n_digit++;
+  return TRUE;
+}
+
+/* Top-level pass: chain atoms, their ring-bond digits and branches (scanned only for their
+ * extent, digits and '@'). FALSE when the text is not of the simple kind. */
+static gboolean
+scan (Scan *sc, const char *s, int len)
+{
+  gboolean bond = FALSE;
+  int      i = 0;
+
+  sc->n_chain = sc->n_branch = sc->n_digit = 0;
+  while (i < len)
+    {
+      char c = s[i];
+      if (c == '(')
+        {
+          int      depth = 1, j = i + 1, b = sc->n_branch;
+          gboolean at = FALSE;
+          if (sc->n_chain == 0 || bond || b >= MAX_BRANCH)
+            return FALSE;
+          while (j < len)
+            {
+              char d = s[j];
+              if (d == '[')
+                {
+                  j = bracket_end (s, len, j, &at);
+                  if (j < 0)
+                    return FALSE;
+                }
+              else if (d == '(')
+                depth++;
+              else if (d == ')')
+                {
+                  if (--depth == 0)
+                    break;
+                }
+              else if (d >= '0' && d <= '9')
+                {
+                  if (!add_digit (sc, d - '0', -(b + 1), FALSE))
+                    return FALSE;
+                }
+              else if (d == '%')
+                {
+                  if (j + 2 >= len || s[j + 1] < '0' || s[j + 1] > '9' || s[j + 2] < '0' || s[j + 2] > '9' ||
+                      !add_digit (sc, (s[j + 1] - '0') * 10 + (s[j + 2] - '0'), -(b + 1), FALSE))
+                    return FALSE;
+                  j += 2;
+                }
+              else if (d == '.')
+                return FALSE;
+              j++;
+            }
+          if (j >= len)
+            return FALSE;
+          sc->br_lo[b] = i + 1;
+          sc->br_hi[b] = j;
+          sc->br_owner[b] = sc->n_chain - 1;
+          sc->br_has_at[b] = at;
+          if (sc->chain[sc->n_chain - 1].n_branch++ == 0)
+            sc->chain[sc->n_chain - 1].first_branch = b;
+          sc->n_branch++;
+          i = j + 1;
+        }
+      else if (c >= '0' && c <= '9')
+        {
+          if (sc->n_chain == 0 || !add_digit (sc, c - '0', sc->n_chain - 1, bond))
+            return FALSE;
+          sc->chain[sc->n_chain - 1].n_digit++;
+          bond = FALSE;
+          i++;
+        }
+      else if (c == '%')
+        {
+          if (sc->n_chain == 0 || i + 2 >= len || s[i + 1] < '0' || s[i + 1] > '9' || s[i + 2] < '0' || s[i + 2] > '9' ||
+              !add_digit (sc, (s[i + 1] - '0') * 10 + (s[i + 2] - '0'), sc->n_chain - 1, bond))
+            return FALSE;
+          sc->chain[sc->n_chain - 1].n_digit++;
+          bond = FALSE;
+          i += 3;
+        }
+      else if (is_bond_char (c))
+        {
+          if (bond)
+            return FALSE;
+          bond = TRUE;
+          i++;
+        }
+      else if (is_atom_start (c))
+        {
+          ChainAtom *a;
+          if (sc->n_chain >= MAX_CHAIN)
+            return FALSE;
+          a = &sc->chain[sc->n_chain++];
+          a->pos = i;
+          a->bond_before = bond;
+          a->n_branch = a->n_digit = 0;
+          a->has_at = FALSE;
+          a->chirality = CW_SM_CHIRAL_NONE;
+          a->hcount = -1;
+          bond = FALSE;
+          if (c == '[')
+            {
+              gboolean at = FALSE;
+              int      j = bracket_end (s, len, i, &at);
+              if (j < 0)
+                return FALSE;
+              a->has_at = at;
+              read_ring_bracket (s, i, j, a);
+              i = j + 1;
+            }
+          else
+            {
+              /* organic subset: two-letter Cl and Br, else one letter */
+              a->kind = c == 'C' && !(i + 1 < len && s[i + 1] == 'l') ? RING_ORGANIC : RING_NOT_OK;
+              i += (c == 'C' && i + 1 < len && s[i + 1] == 'l') || (c == 'B' && i + 1 < len && s[i + 1] == 'r') ? 2 : 1;
+            }
+          a->len = i - a->pos;
+        }
+      else
+        return FALSE;
+    }
+  if (bond || sc->n_chain == 0 || sc->chain[0].bond_before)
+    return FALSE;
+  /* pair the ring-bond digits in text order, as the parser does */
+  {
+    gint8 open[100];
+    memset (open, -1, sizeof open);
+    for (int k = 0; k < sc->n_digit; k++)
+      {
+        int num = sc->dg_num[k];
+        if (open[num] < 0)
+          open[num] = k, sc->dg_pair[k] = -1;
+        else
+          {
+            sc->dg_pair[k] = open[num];
+            sc->dg_pair[open[num]] = k;
+            open[num] = -1;
+          }
+      }
+    for (int k = 0; k < sc->n_digit; k++)
+      if (sc->dg_pair[k] < 0)
+        return FALSE;
+  }
+  return TRUE;
+}
+
+/* Which part of the molecule a digit lies in, once the ring is chain[first..first+5]:
+ * -1 prefix, -2 tail, -3 a ring carbon, or the branch (>= 0) of a ring carbon. */
+static int
+segment_of (const Scan *sc, int seg, int first)
+{
+  int owner = seg >= 0 ? seg : sc->br_owner[-seg - 1];
+
+  if (owner < first)
+    return -1;
+  if (owner > first + 5)
+    return -2;
+  return seg >= 0 ? -3 : -seg - 1;
+}
+
+/* The group of text[lo, hi) rooted at root_off, from the cache, or NULL. */
+static const CwGroup *
+cached_group (const CwSmIndex *index, CwSmGraph *g, const char *s, int lo, int hi, int root_off)
+{
+  const CwGroup      *group;
+  CwSmFragCacheEntry *e;
+  guint64             key;
+
+  while (hi > lo && s[hi - 1] == ')')
+    hi--; /* the stretch the general reader caches ends with the last atom or its ring bonds */
+  if (hi - lo > CW_SM_FRAG_TEXT || hi <= lo || !is_atom_start (s[lo]))
+    return NULL;
+  key = cw_sm_frag_key (s, lo, hi, root_off);
+  e = cw_sm_frag_slot (g->frag_cache, key);
+  if (!cw_sm_frag_entry_is (e, key, s, lo, hi, root_off))
+    return NULL;
+  group = e->group;
+  /* a group with a non-aromatic ring of its own may hold a second candidate ring */
+  if (group == NULL || group->index < 0 || (guint) group->index >= index->n_groups ||
+      index->groups[group->index] != group || index->ring_inside[group->index])
+    return NULL;
+  return group;
+}
+
+int
+cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes)
+{
+  Scan     sc;
+  Reading *r;
+  int      first = -1, n;
+  gboolean tail, prefix;
+
+  if (len > G_MAXUINT16 || !scan (&sc, text, len))
+    return 0;
+  /* the ring: the only ring bond joining two top-level atoms five apart */
+  for (int k = 0; k < sc.n_digit; k++)
+    {
+      int p = sc.dg_pair[k];
+      if (p > k && sc.dg_seg[k] >= 0 && sc.dg_seg[p] == sc.dg_seg[k] + 5)
+        {
+          if (first >= 0)
+            return 0;
+          first = sc.dg_seg[k];
+          if (sc.dg_bond[k] || sc.dg_bond[p])
+            return 0;
+        }
+    }
+  if (first < 0)
+    return 0;
+  for (int k = 0; k < 6; k++)
+    {
+      const ChainAtom *a = &sc.chain[first + k];
+      if (a->kind == RING_NOT_OK || a->n_digit != (k == 0 || k == 5) || (a->bond_before && (k > 0 || first > 0)))
+        return 0;
+    }
+  /* every other ring bond stays inside one substituent */
+  for (int k = 0; k < sc.n_digit; k++)
+    {
+      int here = segment_of (&sc, sc.dg_seg[k], first);
+      if (here == -3)
+        continue; /* the ring's own bond (ring carbons carry no other) */
+      if (here != segment_of (&sc, sc.dg_seg[sc.dg_pair[k]], first))
+        return 0;
+    }
+  prefix = first > 0;
+  tail = first + 6 < sc.n_chain;
+  if (tail && sc.chain[first + 6].bond_before)
+    return 0;
+
+  r = g_alloca (sizeof (Reading));
+  r->g = g;
+  r->index = index;
+  r->n_subs = 0;
+  r->inner_stereo = FALSE;
+  g->text = text;
+  g->text_len = len;
+  g->n_atoms = CW_RING_SIZE;
+  g->n_closures = 0;
+  g->n_dots = 0;
+  for (int k = 0; k < sc.n_chain; k++)
+    if (k < first || k > first + 5)
+      r->inner_stereo |= sc.chain[k].has_at;
+  for (int b = 0; b < sc.n_branch; b++)
+    r->inner_stereo |= sc.br_has_at[b];
+
+  for (int k = 0; k < CW_RING_SIZE; k++)
+    {
+      const ChainAtom *a = &sc.chain[first + k];
+      int              degree = 2 + a->n_branch + (k == 0 && prefix) + (k == 5 && tail), s0 = r->n_subs;
+      int              w[4], nw = 0, n_here;
+
+      if (degree > 4 || (a->kind == RING_BRACKET && degree + a->hcount != 4))
+        return 0;
+      r->ring[k] = k;
+      g->atoms[k].pos = a->pos;
+      g->atoms[k].len = a->len;
+      /* substituents in the order their bonds were written */
+      if (k == 0 && prefix)
+        {
+          const ChainAtom *root = &sc.chain[first - 1];
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[0].pos, a->pos, root->pos - sc.chain[0].pos);
+          r->sub_ring[r->n_subs++] = k;
+        }
+      for (int b = a->first_branch; b < a->first_branch + a->n_branch; b++)
+        {
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0);
+          r->sub_ring[r->n_subs++] = k;
+        }
+      if (k == 5 && tail)
+        {
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[first + 6].pos, len, 0);
+          r->sub_ring[r->n_subs++] = k;
+        }
+      n_here = r->n_subs - s0;
+      for (int s = s0; s < r->n_subs; s++)
+        {
+          r->sub_face[s] = -1;
+          if (r->sub_group[s] == NULL)
+            return 0;
+        }
+      if (n_here == 0 || a->chirality == CW_SM_CHIRAL_NONE)
+        continue;
+      /* the neighbour order @/@@ refers to (previous ring carbon 0, next 1, first group 2,
+       * second group or H 3): the bond to the atom before, the H, the ring bond, the
+       * branches, the atom after */
+      if (k > 0)
+        w[nw++] = 0;
+      else if (prefix)
+        w[nw++] = 2;
+      if (a->hcount > 0)
+        w[nw++] = 3;
+      if (k == 0)
+        w[nw++] = 0;
+      else if (k == 5)
+        w[nw++] = 1;
+      for (int b = 0; b < a->n_branch; b++)
+        w[nw++] = (k == 0 && prefix) || b > 0 ? 3 : 2;
+      if (k < 5)
+        w[nw++] = 1;
+      else if (tail)
+        w[nw++] = a->n_branch > 0 ? 3 : 2;
+      {
+        guint seen = 0;
+        int   inversions = 0;
+        gboolean clockwise;
+        if (nw != 4)
+          continue;
+        for (int x = 0; x < 4; x++)
+          seen |= 1u << w[x];
+        if (seen != 0xf)
+          continue;
+        for (int x = 0; x < 4; x++)
+          for (int y = x + 1; y < 4; y++)
+            inversions += w[x] > w[y];
+        clockwise = (a->chirality == CW_SM_CHIRAL_CLOCKWISE) == (inversions % 2 == 0);
+        r->sub_face[s0] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
+        if (n_here == 2)
+          r->sub_face[s0 + 1] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
+      }
+    }
+  info->n_dropped = 0;
+  n = cw_sm_make_molecules (r, out, max_out, info, notes, NULL);
+  if (n <= 0)
+    {
+      info->n_open = 0;
+      return 0;
+    }
+  info->n_molecules = n;
+  return n;
+}
