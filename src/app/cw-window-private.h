@@ -66,7 +66,7 @@ struct _CwWindow
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
    * what an edit would otherwise spend most of its time on) */
   GPtrArray *term_cells; /* GtkLabel*, 4 per grid row, row 0 the header */
-  GPtrArray *flag_rows;  /* GtkBox* holding a GtkImage and a GtkLabel */
+  GPtrArray *flag_rows;  /* GtkGrid* holding a GtkImage and a GtkLabel */
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */

@@ -53,16 +53,21 @@ flag_row (CwWindow *self,
 
   if (i < self->flag_rows->len)
     return g_ptr_array_index (self->flag_rows, i);
-  row = gtk_box_new (GTK_ORIENTATION_HORIZONTAL, 8);
+  /* A grid, not a horizontal box: a box asks its wrapping label for its width at the
+   * row's height, which GtkLabel answers by laying the text out again and again (a
+   * binary search over widths, 20 ms and more for one new flag); the grid asks for
+   * widths first and heights for them after, as the label is laid out anyway. */
+  row = gtk_grid_new ();
   icon = gtk_image_new ();
   label = gtk_label_new (NULL);
+  gtk_grid_set_column_spacing (GTK_GRID (row), 8);
   gtk_widget_add_css_class (row, "cw-flag");
   gtk_widget_set_valign (icon, GTK_ALIGN_START);
   gtk_label_set_wrap (GTK_LABEL (label), TRUE);
   gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
   gtk_widget_set_hexpand (label, TRUE);
-  gtk_box_append (GTK_BOX (row), icon);
-  gtk_box_append (GTK_BOX (row), label);
+  gtk_grid_attach (GTK_GRID (row), icon, 0, 0, 1, 1);
+  gtk_grid_attach (GTK_GRID (row), label, 1, 0, 1, 1);
   gtk_box_append (self->flags_box, row);
   g_ptr_array_add (self->flag_rows, row);
   return row;
@@ -82,11 +87,16 @@ update_flags (CwWindow *self)
       GtkWidget       *row = flag_row (self, i);
       GtkWidget       *icon = gtk_widget_get_first_child (row);
       GtkWidget       *label = gtk_widget_get_next_sibling (icon);
+      const char      *icon_name = info ? "dialog-information-symbolic" : "dialog-warning-symbolic";
 
       set_css_class (row, "cw-info", info);
-      gtk_image_set_from_icon_name (GTK_IMAGE (icon), info ? "dialog-information-symbolic" : "dialog-warning-symbolic");
-      gtk_accessible_update_property (GTK_ACCESSIBLE (icon), GTK_ACCESSIBLE_PROPERTY_LABEL,
-                                      info ? _("Note") : _("Warning"), -1);
+      /* Setting the same icon again would still make the image measure and draw anew. */
+      if (g_strcmp0 (gtk_image_get_icon_name (GTK_IMAGE (icon)), icon_name) != 0)
+        {
+          gtk_image_set_from_icon_name (GTK_IMAGE (icon), icon_name);
+          gtk_accessible_update_property (GTK_ACCESSIBLE (icon), GTK_ACCESSIBLE_PROPERTY_LABEL,
+                                          info ? _("Note") : _("Warning"), -1);
+        }
       gtk_label_set_text (GTK_LABEL (label), msg);
       gtk_widget_set_visible (row, TRUE);
     }

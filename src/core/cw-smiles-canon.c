@@ -92,47 +92,68 @@ cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[
   key_from_slots (&s, t, key);
 }
 
-static int
-compare_keys (const gint64 *a, const gint64 *b)
+/* A group rank in 21 bits, order kept: table ranks and custom ones stay below 2^21 - 1, and an
+ * empty slot (rank 2^40) becomes 2^21 - 1. */
+static inline guint64
+rank21 (gint64 rank)
 {
-  for (int i = 0; i < CW_SM_KEY_LEN; i++)
-    if (a[i] != b[i])
-      return a[i] < b[i] ? -1 : 1;
-  return 0;
+  return rank >= (1 << 21) - 1 ? (1 << 21) - 1 : (guint64) rank;
 }
 
+/* The same order as comparing the keys of key_from_slots, on packed numbers: the occupancy,
+ * then per result position one number holding (first face's rank, second face's rank). */
 void
 cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransform *out)
 {
-  gint64   best[CW_SM_KEY_LEN], key[CW_SM_KEY_LEN];
+  guint64 packed[2][CW_RING_SIZE + 1], best[CW_RING_SIZE + 1], rank[CW_RING_SIZE + 1][2];
+  int     count[CW_RING_SIZE + 1] = { 0 }, max_count = 0;
+  gint64  best_occupancy = 0;
   gboolean have = FALSE;
-  Slots    s;
-  int      max_count = 0;
 
-  fill_slots (mol, &s);
   for (int p = 1; p <= CW_RING_SIZE; p++)
-    max_count = MAX (max_count, s.count[p]);
+    rank[p][0] = rank[p][1] = (1 << 21) - 1;
+  for (int i = 0; i < mol->n_subs; i++)
+    {
+      const CwSubstituent *x = &mol->subs[i];
+      rank[x->position][x->face == CW_FACE_UP ? 0 : 1] = rank21 (cw_sm_group_rank (x->group));
+      count[x->position]++;
+    }
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      max_count = MAX (max_count, count[p]);
+      packed[0][p] = rank[p][0] << 21 | rank[p][1];
+      packed[1][p] = rank[p][1] << 21 | rank[p][0];
+    }
   for (int f = 0; f < (mirror ? 2 : 1); f++)
     for (int d = 0; d < 2; d++)
       for (int st = 1; st <= CW_RING_SIZE; st++)
         {
-          CwRingTransform t = { st, d ? -1 : 1, f };
-          gint64          occupancy = 0;
+          const guint8 *src = source_table[d][st];
+          const guint64 *pk = packed[d != f];
+          gint64        occupancy = 0;
+          int           p;
           /* only numberings that start on a carbon with the most groups can win, and of
            * those only the ones with the lowest locants (compared first, cheaply) */
-          if (s.count[st] != max_count)
+          if (count[st] != max_count)
             continue;
-          for (int p = 1; p <= CW_RING_SIZE; p++)
-            occupancy = occupancy * 3 + (2 - s.count[source_position (&t, p)]);
-          if (have && occupancy > best[0])
+          for (p = 1; p <= CW_RING_SIZE; p++)
+            occupancy = occupancy * 3 + (2 - count[src[p]]);
+          if (have && occupancy > best_occupancy)
             continue;
-          key_from_slots (&s, &t, key);
-          if (!have || compare_keys (key, best) < 0)
+          if (have && occupancy == best_occupancy)
             {
-              memcpy (best, key, sizeof best);
-              *out = t;
-              have = TRUE;
+              for (p = 1; p <= CW_RING_SIZE && pk[src[p]] == best[p]; p++)
+                ;
+              if (p > CW_RING_SIZE || pk[src[p]] > best[p])
+                continue;
             }
+          for (p = 1; p <= CW_RING_SIZE; p++)
+            best[p] = pk[src[p]];
+          best_occupancy = occupancy;
+          out->start = st;
+          out->dir = d ? -1 : 1;
+          out->flip = f;
+          have = TRUE;
         }
 }
 

@@ -8,6 +8,8 @@
  * configuration does not change the conformational analysis. */
 #include "config.h"
 
+#include <string.h>
+
 #include "cw-smiles-private.h"
 
 enum
@@ -44,52 +46,90 @@ ring_token (gboolean marked, int n_groups, const int w[4])
   return clockwise ? "[C@]" : "[C@@]";
 }
 
+/* The text of one group: written from its attachment atom (fwd) and towards it (rev, or NULL). */
 typedef struct
 {
-  const CwSmIndex *index;
-  GString         *out;
+  const char *fwd, *rev;
+  gsize       fwd_len, rev_len;
+  char       *owned_fwd, *owned_rev;
+} GroupText;
+
+static void
+group_text (const CwGroup *g, const CwSmIndex *index, GroupText *t)
+{
+  char    *fwd, *rev;
+  gboolean owned;
+
+  if (index && g->index >= 0 && (guint) g->index < index->n_groups && index->groups[g->index] == g &&
+      index->fwd_len[g->index] > 0)
+    {
+      t->fwd = index->fwd[g->index];
+      t->fwd_len = index->fwd_len[g->index];
+      t->rev = index->rev[g->index];
+      t->rev_len = t->rev ? index->rev_len[g->index] : 0;
+      if (t->rev && t->rev_len == 0)
+        t->rev_len = strlen (t->rev);
+      t->owned_fwd = t->owned_rev = NULL;
+      return;
+    }
+  cw_sm_group_strings (g, index, &fwd, &rev, &owned);
+  t->fwd = fwd;
+  t->rev = rev;
+  t->fwd_len = fwd ? strlen (fwd) : 0;
+  t->rev_len = rev ? strlen (rev) : 0;
+  t->owned_fwd = owned ? fwd : NULL;
+  t->owned_rev = owned ? rev : NULL;
+}
+
+/* The output is written straight into the string's buffer, sized beforehand. */
+typedef struct
+{
+  char *p;
 } Ctx;
 
-/* Appends the group written from (or, reverse, towards) its attachment atom; FALSE when it has
- * no string written towards it (nothing appended). */
-static gboolean
-append_group (Ctx *c, const CwGroup *g, gboolean reverse)
+static inline void
+put (Ctx *c, const char *s, gsize n)
 {
-  char       *fwd, *rev;
-  gboolean    owned;
-  const char *text;
+  memcpy (c->p, s, n);
+  c->p += n;
+}
 
-  cw_sm_group_strings (g, c->index, &fwd, &rev, &owned);
-  text = reverse ? rev : fwd;
-  if (text)
-    g_string_append (c->out, text);
-  if (owned)
-    {
-      g_free (fwd);
-      g_free (rev);
-    }
-  return text != NULL;
+static inline void
+put_c (Ctx *c, char ch)
+{
+  *c->p++ = ch;
+}
+
+static inline void
+put_token (Ctx *c, const char *token)
+{
+  put (c, token, strlen (token));
+}
+
+static inline void
+put_branch (Ctx *c, const GroupText *t)
+{
+  put_c (c, '(');
+  put (c, t->fwd, t->fwd_len);
+  put_c (c, ')');
 }
 
 static void
-write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
+write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
 {
-  int            n = (slot[0] != NULL) + (slot[1] != NULL);
-  int            f = slot[0] != NULL ? UP : DOWN; /* face of the single group */
-  int            h = f == UP ? DOWN : UP;
-  const CwGroup *first = slot[0] != NULL ? slot[0] : slot[1];
+  int              n = (slot[0] != NULL) + (slot[1] != NULL);
+  int              f = slot[0] != NULL ? UP : DOWN; /* face of the single group */
+  int              h = f == UP ? DOWN : UP;
+  const GroupText *first = slot[0] != NULL ? slot[0] : slot[1];
 
-  if (p == 1 && append_group (c, first, TRUE))
+  if (p == 1 && first->rev != NULL)
     {
       int w1[4] = { f, h, PREV, NEXT }, w2[4] = { UP, PREV, DOWN, NEXT };
-      g_string_append (c->out, ring_token (marked, n, n == 2 ? w2 : w1));
-      g_string_append_c (c->out, '1');
+      put (c, first->rev, first->rev_len);
+      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+      put_c (c, '1');
       if (n == 2)
-        {
-          g_string_append_c (c->out, '(');
-          append_group (c, slot[1], FALSE);
-          g_string_append_c (c->out, ')');
-        }
+        put_branch (c, slot[1]);
       return;
     }
   if (p == 1)
@@ -97,44 +137,40 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
       /* the group cannot be written towards the ring: the ring carbon comes first, its implicit
        * H (if any) first in its neighbour order, then ring bond 1, then the groups */
       int w1[4] = { h, PREV, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
-      g_string_append (c->out, ring_token (marked, n, n == 2 ? w2 : w1));
-      g_string_append_c (c->out, '1');
+      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+      put_c (c, '1');
       for (int k = 0; k < 2; k++)
         if (slot[k] != NULL)
-          {
-            g_string_append_c (c->out, '(');
-            append_group (c, slot[k], FALSE);
-            g_string_append_c (c->out, ')');
-          }
+          put_branch (c, slot[k]);
       return;
     }
   if (p < CW_RING_SIZE)
     {
       int w1[4] = { PREV, h, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
-      g_string_append (c->out, n ? ring_token (marked, n, n == 2 ? w2 : w1) : "C");
+      if (n)
+        put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+      else
+        put_c (c, 'C');
       for (int k = 0; k < 2; k++)
         if (slot[k] != NULL)
-          {
-            g_string_append_c (c->out, '(');
-            append_group (c, slot[k], FALSE);
-            g_string_append_c (c->out, ')');
-          }
+          put_branch (c, slot[k]);
       return;
     }
   {
     int w1[4] = { PREV, h, NEXT, f }, w2[4] = { PREV, NEXT, UP, DOWN };
     int written = 0;
-    g_string_append (c->out, n ? ring_token (marked, n, n == 2 ? w2 : w1) : "C");
-    g_string_append_c (c->out, '1');
+    if (n)
+      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+    else
+      put_c (c, 'C');
+    put_c (c, '1');
     for (int k = 0; k < 2; k++)
       if (slot[k] != NULL)
         {
-          gboolean branch = ++written < n;
-          if (branch)
-            g_string_append_c (c->out, '(');
-          append_group (c, slot[k], FALSE);
-          if (branch)
-            g_string_append_c (c->out, ')');
+          if (++written < n)
+            put_branch (c, slot[k]);
+          else
+            put (c, slot[k]->fwd, slot[k]->fwd_len);
         }
   }
 }
@@ -142,13 +178,27 @@ write_position (Ctx *c, int p, const CwGroup *slot[2], gboolean marked)
 static void
 write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *relevant, gboolean marks, GString *out)
 {
-  const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  Ctx            c = { index, out };
+  GroupText        text[CW_MAX_SUBS];
+  const GroupText *slot[CW_RING_SIZE + 1][2] = { { NULL } };
+  gsize            start = out->len, bound = 6 * 8 + 4;
+  Ctx              c;
 
   for (int i = 0; i < m->n_subs; i++)
-    slot[m->subs[i].position][m->subs[i].face == CW_FACE_UP ? 0 : 1] = m->subs[i].group;
+    {
+      group_text (m->subs[i].group, index, &text[i]);
+      bound += text[i].fwd_len + text[i].rev_len + 2;
+      slot[m->subs[i].position][m->subs[i].face == CW_FACE_UP ? 0 : 1] = &text[i];
+    }
+  g_string_set_size (out, start + bound);
+  c.p = out->str + start;
   for (int p = 1; p <= CW_RING_SIZE; p++)
     write_position (&c, p, slot[p], marks && relevant[p]);
+  g_string_truncate (out, c.p - out->str);
+  for (int i = 0; i < m->n_subs; i++)
+    {
+      g_free (text[i].owned_fwd);
+      g_free (text[i].owned_rev);
+    }
 }
 
 void
