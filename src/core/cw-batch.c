@@ -16,6 +16,7 @@
 #include "cw-core-error.h"
 #include "cw-smiles-private.h"
 #include "cw-smiles.h"
+#include "cw-strbuf.h"
 
 #define IN_SIZE (1 << 20)
 #define OUT_SIZE (1 << 18)
@@ -91,64 +92,63 @@ puts_ (Batch *b, const char *s)
   put (b, s, strlen (s));
 }
 
-/* Fixed-point with `decimals` digits; falls back to printf for huge or odd values. */
+/* Digit pairs "00".."99": two digits a step. */
+static const char digit_pairs[201] = "00010203040506070809101112131415161718192021222324252627282930313233343536373839"
+                                     "40414243444546474849505152535455565758596061626364656667686970717273747576777879"
+                                     "8081828384858687888990919293949596979899";
+
+/* Fixed-point with `decimals` digits (0..6), halves rounded away from zero; printf for huge or
+ * odd values. */
 static int
-fmt_fixed (char *buf, double x, int decimals) /* decimals 0..6 */
+fmt_fixed (char *buf, double x, int decimals)
 {
-  static const double scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
-  guint64             v, ip, fp;
-  int                 n = 0;
-  char                tmp[24];
-  int                 t = 0;
+  static const double  scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
+  static const guint64 iscale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
+  guint64              v, ip, fp;
+  int                  n = 0, t;
+  char                 tmp[24];
 
   if (!isfinite (x) || fabs (x) >= 1e12)
     return g_snprintf (buf, 32, "%.*g", decimals + 3, x);
-  if (x < 0)
-    {
-      v = (guint64) (-x * scale[decimals] + 0.5);
-      if (v != 0)
-        buf[n++] = '-';
-    }
+  v = (guint64) ((x < 0 ? -x : x) * scale[decimals] + 0.5);
+  if (x < 0 && v != 0)
+    buf[n++] = '-';
+  ip = v / iscale[decimals];
+  fp = v - ip * iscale[decimals];
+  /* integer part */
+  if (ip < 10)
+    buf[n++] = '0' + ip;
   else
-    v = (guint64) (x * scale[decimals] + 0.5);
-  /* constant divisors, so the compiler multiplies instead of dividing */
-  switch (decimals)
     {
-    case 0:
-      ip = v, fp = 0;
-      break;
-    case 1:
-      ip = v / 10, fp = v % 10;
-      break;
-    case 2:
-      ip = v / 100, fp = v % 100;
-      break;
-    case 3:
-      ip = v / 1000, fp = v % 1000;
-      break;
-    case 4:
-      ip = v / 10000, fp = v % 10000;
-      break;
-    case 5:
-      ip = v / 100000, fp = v % 100000;
-      break;
-    default:
-      ip = v / 1000000, fp = v % 1000000;
-      break;
+      t = sizeof tmp;
+      while (ip >= 100)
+        {
+          guint64 q = ip / 100;
+          t -= 2;
+          memcpy (tmp + t, digit_pairs + 2 * (ip - q * 100), 2);
+          ip = q;
+        }
+      if (ip >= 10)
+        t -= 2, memcpy (tmp + t, digit_pairs + 2 * ip, 2);
+      else
+        tmp[--t] = '0' + ip;
+      memcpy (buf + n, tmp + t, sizeof tmp - t);
+      n += sizeof tmp - t;
     }
-  do
-    tmp[t++] = '0' + ip % 10, ip /= 10;
-  while (ip);
-  while (t)
-    buf[n++] = tmp[--t];
   if (decimals)
     {
+      int d = decimals;
       buf[n++] = '.';
-      for (int d = decimals - 1; d >= 0; d--)
+      /* fraction: right to left, two digits a step */
+      while (d >= 2)
         {
-          buf[n + d] = '0' + fp % 10;
-          fp /= 10;
+          guint64 q = fp / 100;
+          d -= 2;
+          memcpy (buf + n + d, digit_pairs + 2 * (fp - q * 100), 2);
+          fp = q;
         }
+      if (d)
+        buf[n] = '0' + fp;
       n += decimals;
     }
   buf[n] = '\0';
@@ -238,11 +238,11 @@ append_configuration (const CwMolecule *m, GString *s)
       for (int i = 0; i < m->n_subs; i++)
         {
           if (i)
-            g_string_append_c (s, ' ');
-          g_string_append_c (s, '0' + m->subs[i].position);
-          g_string_append_c (s, m->subs[i].face == CW_FACE_UP ? 'u' : 'd');
-          g_string_append_c (s, '=');
-          g_string_append (s, m->subs[i].group->id);
+            cw_str_putc (s, ' ');
+          cw_str_putc (s, '0' + m->subs[i].position);
+          cw_str_putc (s, m->subs[i].face == CW_FACE_UP ? 'u' : 'd');
+          cw_str_putc (s, '=');
+          cw_str_puts (s, m->subs[i].group->id);
         }
     }
 }
@@ -274,20 +274,20 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
   q = g_stpcpy (q, json ? "],\"flags\":[" : sep);
   if (json)
     {
-      g_string_append (s, "\"smiles\":\"");
+      cw_str_puts (s, "\"smiles\":\"");
       cw_sm_reader_write_canonical (b->reader, m, s);
-      g_string_append (s, "\",\"configuration\":\"");
+      cw_str_puts (s, "\",\"configuration\":\"");
       append_configuration (m, s);
-      g_string_append (s, an->major ? "\",\"major_chair\":2,\"delta_g\":" : "\",\"major_chair\":1,\"delta_g\":");
+      cw_str_puts (s, an->major ? "\",\"major_chair\":2,\"delta_g\":" : "\",\"major_chair\":1,\"delta_g\":");
     }
   else
     {
       cw_sm_reader_write_canonical (b->reader, m, s);
-      g_string_append_c (s, ',');
+      cw_str_putc (s, ',');
       append_configuration (m, s);
-      g_string_append (s, an->major ? ",2," : ",1,");
+      cw_str_puts (s, an->major ? ",2," : ",1,");
     }
-  g_string_append_len (s, num, q - num);
+  cw_str_put (s, num, q - num);
   for (int k = 0; k < an->n_flags; k++)
     {
       CwFlagCode code = an->flags[k].code;
@@ -295,12 +295,12 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
         continue;
       seen |= 1u << code;
       if (n_flags)
-        g_string_append_c (s, b->opt->json ? ',' : ';');
+        cw_str_putc (s, b->opt->json ? ',' : ';');
       if (b->opt->json)
-        g_string_append_c (s, '"');
-      g_string_append (s, cw_flag_code_to_string (code));
+        cw_str_putc (s, '"');
+      cw_str_puts (s, cw_flag_code_to_string (code));
       if (b->opt->json)
-        g_string_append_c (s, '"');
+        cw_str_putc (s, '"');
       n_flags++;
     }
 }

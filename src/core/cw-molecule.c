@@ -1,6 +1,7 @@
 #include "config.h"
 
 #include "cw-molecule.h"
+#include "cw-strbuf.h"
 
 #include <glib/gi18n-lib.h>
 #include <string.h>
@@ -235,17 +236,17 @@ cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
     {
       for (int p = ref + 1; p <= CW_RING_SIZE; p++)
         if (faces[p] >= 0)
-          g_string_append (out, faces[p] == faces[ref] ? "cis" : "trans");
+          cw_str_puts (out, faces[p] == faces[ref] ? "cis" : "trans");
       return;
     }
   /* no printf: batch runs call this once a compound */
-  g_string_append (out, "r-");
-  g_string_append_c (out, (char) ('0' + ref));
+  cw_str_put (out, "r-", 2);
+  cw_str_putc (out, (char) ('0' + ref));
   for (int p = ref + 1; p <= CW_RING_SIZE; p++)
     if (faces[p] >= 0)
       {
-        g_string_append (out, faces[p] == faces[ref] ? ", c-" : ", t-");
-        g_string_append_c (out, (char) ('0' + p));
+        cw_str_put (out, faces[p] == faces[ref] ? ", c-" : ", t-", 4);
+        cw_str_putc (out, (char) ('0' + p));
       }
 }
 
