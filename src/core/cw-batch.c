@@ -305,6 +305,28 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
     }
 }
 
+/* The cache key of a molecule as the reader returns it (numbered canonically, its groups in
+ * position and face order, so equal molecules have equal lists): the number of groups, then
+ * each group's position, face and table index, two to a word. FALSE for a group outside the
+ * table. */
+static gboolean
+molecule_key (const CwMolecule *m, gint64 key[CW_SM_KEY_LEN])
+{
+  G_STATIC_ASSERT (1 + (CW_MAX_SUBS + 1) / 2 <= CW_SM_KEY_LEN);
+  memset (key, 0, sizeof (gint64) * CW_SM_KEY_LEN);
+  key[0] = m->n_subs;
+  for (int i = 0; i < m->n_subs; i++)
+    {
+      const CwGroup *g = m->subs[i].group;
+      guint64        v;
+      if (g->index < 0 || g->index > 0xffff || g->custom)
+        return FALSE;
+      v = ((guint64) m->subs[i].position << 1 | (m->subs[i].face == CW_FACE_UP)) << 16 | (guint64) g->index;
+      key[1 + i / 2] |= (gint64) (v << (32 * (i % 2)));
+    }
+  return TRUE;
+}
+
 static guint64
 key_hash (const gint64 *key)
 {
@@ -318,13 +340,21 @@ key_hash (const gint64 *key)
 static const char *
 result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
 {
-  CwRingTransform id = { 1, 1, FALSE };
-  gint64          key[CW_SM_KEY_LEN];
-  CacheEntry     *e;
-  guint64         h;
-  guint           slot;
+  gint64      key[CW_SM_KEY_LEN];
+  CacheEntry *e;
+  guint64     h;
+  guint       slot;
 
-  cw_sm_molecule_key (m, &id, key);
+  if (!molecule_key (m, key))
+    {
+      /* a group outside the table: no caching */
+      if (!cw_analyze (b->data, m, &b->cond, &b->an, error))
+        return NULL;
+      g_string_truncate (b->scratch, 0);
+      format_result (b, m, &b->an, b->scratch);
+      *len = b->scratch->len;
+      return b->scratch->str;
+    }
   h = key_hash (key);
   slot = h & (CACHE_SLOTS - 1);
   e = &b->cache[slot];

@@ -107,7 +107,8 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
 {
   guint64 packed[2][CW_RING_SIZE + 1], best[CW_RING_SIZE + 1], rank[CW_RING_SIZE + 1][2];
   int     count[CW_RING_SIZE + 1] = { 0 }, max_count = 0;
-  gint64  best_occupancy = 0;
+  guint   best_occupancy = 0, fwd = 0, bwd = 0;
+  int     starts[CW_RING_SIZE], n_starts = 0;
   gboolean have = FALSE;
 
   for (int p = 1; p <= CW_RING_SIZE; p++)
@@ -124,20 +125,32 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
       packed[0][p] = rank[p][0] << 21 | rank[p][1];
       packed[1][p] = rank[p][1] << 21 | rank[p][0];
     }
+  /* occupancy digits (2 - count) two bits each, the first position in the highest bits: a
+   * numbering's digits are a rotation of the forward or the backward sequence, and comparing
+   * the 12-bit numbers compares the sequences as the base-3 occupancy of the keys does */
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      fwd = fwd << 2 | (guint) (2 - count[p]);
+      bwd = bwd << 2 | (guint) (2 - count[source_table[1][1][p]]);
+      if (count[p] == max_count)
+        starts[n_starts++] = p;
+    }
+  /* only numberings that start on a carbon with the most groups can win; of those the ones
+   * with the lowest locants, then the lowest ranks; the first of equals is kept */
   for (int f = 0; f < (mirror ? 2 : 1); f++)
     for (int d = 0; d < 2; d++)
-      for (int st = 1; st <= CW_RING_SIZE; st++)
+      for (int k = 0; k < n_starts; k++)
         {
-          const guint8 *src = source_table[d][st];
+          int            st = starts[k], sh;
+          const guint8  *src = source_table[d][st];
           const guint64 *pk = packed[d != f];
-          gint64        occupancy = 0;
-          int           p;
-          /* only numberings that start on a carbon with the most groups can win, and of
-           * those only the ones with the lowest locants (compared first, cheaply) */
-          if (count[st] != max_count)
-            continue;
-          for (p = 1; p <= CW_RING_SIZE; p++)
-            occupancy = occupancy * 3 + (2 - count[src[p]]);
+          guint          occupancy;
+          int            p;
+          if (d == 0)
+            sh = 2 * (st - 1), occupancy = ((fwd << sh) | (fwd >> (12 - sh))) & 0xfff;
+          else
+            /* backward from st (st, st-1, …) is bwd (1, 6, 5, …) turned by 6 - (st - 1) digits */
+            sh = (2 * (CW_RING_SIZE - (st - 1))) % 12, occupancy = ((bwd << sh) | (bwd >> (12 - sh))) & 0xfff;
           if (have && occupancy > best_occupancy)
             continue;
           if (have && occupancy == best_occupancy)
