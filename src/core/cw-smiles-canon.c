@@ -196,6 +196,18 @@ cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecul
   out->n_subs = n;
 }
 
+void
+cw_sm_canonicalize (CwMolecule *mol, gboolean mirror)
+{
+  CwRingTransform t;
+  CwMolecule      tmp;
+
+  cw_sm_canonical_transform (mol, mirror, &t);
+  cw_sm_apply_transform (mol, &t, &tmp);
+  memcpy (mol->subs, tmp.subs, sizeof (CwSubstituent) * tmp.n_subs);
+  mol->n_subs = tmp.n_subs;
+}
+
 int
 cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1])
 {

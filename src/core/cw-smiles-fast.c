@@ -58,6 +58,24 @@ typedef struct
   int       n_digit;
 } Scan;
 
+/* Character classes inside a branch: what the scan must look at. */
+enum
+{
+  CL_PLAIN = 0,
+  CL_BRACKET,
+  CL_OPEN,
+  CL_CLOSE,
+  CL_DIGIT,
+  CL_PERCENT,
+  CL_DOT
+};
+
+static const guint8 char_class[256] = {
+  ['['] = CL_BRACKET, ['('] = CL_OPEN, [')'] = CL_CLOSE, ['%'] = CL_PERCENT, ['.'] = CL_DOT,
+  ['0'] = CL_DIGIT, ['1'] = CL_DIGIT, ['2'] = CL_DIGIT, ['3'] = CL_DIGIT, ['4'] = CL_DIGIT,
+  ['5'] = CL_DIGIT, ['6'] = CL_DIGIT, ['7'] = CL_DIGIT, ['8'] = CL_DIGIT, ['9'] = CL_DIGIT,
+};
+
 static inline gboolean
 is_bond_char (char c)
 {
@@ -149,33 +167,36 @@ scan (Scan *sc, const char *s, int len)
           while (j < len)
             {
               char d = s[j];
-              if (d == '[')
+              switch (char_class[(guchar) d])
                 {
+                case CL_PLAIN:
+                  break;
+                case CL_BRACKET:
                   j = bracket_end (s, len, j, &at);
                   if (j < 0)
                     return FALSE;
-                }
-              else if (d == '(')
-                depth++;
-              else if (d == ')')
-                {
-                  if (--depth == 0)
-                    break;
-                }
-              else if (d >= '0' && d <= '9')
-                {
+                  break;
+                case CL_OPEN:
+                  depth++;
+                  break;
+                case CL_CLOSE:
+                  depth--;
+                  break;
+                case CL_DIGIT:
                   if (!add_digit (sc, d - '0', -(b + 1), FALSE))
                     return FALSE;
-                }
-              else if (d == '%')
-                {
+                  break;
+                case CL_PERCENT:
                   if (j + 2 >= len || s[j + 1] < '0' || s[j + 1] > '9' || s[j + 2] < '0' || s[j + 2] > '9' ||
                       !add_digit (sc, (s[j + 1] - '0') * 10 + (s[j + 2] - '0'), -(b + 1), FALSE))
                     return FALSE;
                   j += 2;
+                  break;
+                default: /* '.' */
+                  return FALSE;
                 }
-              else if (d == '.')
-                return FALSE;
+              if (depth == 0)
+                break;
               j++;
             }
           if (j >= len)
@@ -288,7 +309,7 @@ segment_of (const Scan *sc, int seg, int first)
 
 /* The group of text[lo, hi) rooted at root_off, from the cache, or NULL. */
 static const CwGroup *
-cached_group (const CwSmIndex *index, CwSmGraph *g, const char *s, int lo, int hi, int root_off)
+cached_group (const CwSmIndex *index, CwSmGraph *g, const char *s, int lo, int hi, int root_off, gboolean *cyclohexyl)
 {
   const CwGroup      *group;
   CwSmFragCacheEntry *e;
@@ -299,15 +320,62 @@ cached_group (const CwSmIndex *index, CwSmGraph *g, const char *s, int lo, int h
   if (hi - lo > CW_SM_FRAG_TEXT || hi <= lo || !is_atom_start (s[lo]))
     return NULL;
   key = cw_sm_frag_key (s, lo, hi, root_off);
-  e = cw_sm_frag_slot (g->frag_cache, key);
-  if (!cw_sm_frag_entry_is (e, key, s, lo, hi, root_off))
+  e = cw_sm_frag_find (g->frag_cache, key, s, lo, hi, root_off);
+  if (e == NULL || (group = e->group) == NULL || group->index < 0 || (guint) group->index >= index->n_groups ||
+      index->groups[group->index] != group)
     return NULL;
-  group = e->group;
-  /* a group with a non-aromatic ring of its own may hold a second candidate ring */
-  if (group == NULL || group->index < 0 || (guint) group->index >= index->n_groups ||
-      index->groups[group->index] != group || index->ring_inside[group->index])
-    return NULL;
+  /* a group with a non-aromatic ring of its own may hold a second candidate ring: only a
+   * plain cyclohexyl is known not to compete (see cw_sm_read_fast) */
+  if (index->ring_inside[group->index])
+    {
+      if (index->ring_inside[group->index] != CW_SM_RING_CYCLOHEXYL)
+        return NULL;
+      *cyclohexyl = TRUE;
+    }
   return group;
+}
+
+/* The molecule when no ring stereocentre is left open, as cw_sm_make_molecules makes it: the
+ * groups in (position, face) order, an unwritten face up for the first group of a carbon and
+ * down for the second, then the canonical numbering (mirror images counted as one when fewer
+ * than two carbons are stereocentres). FALSE when a stereocentre is open. */
+static gboolean
+one_molecule (const Reading *r, CwMolecule *m)
+{
+  int      n_rel = 0;
+  gboolean open = FALSE;
+
+  m->custom_groups = NULL;
+  m->n_subs = r->n_subs;
+  for (int s = 0; s < r->n_subs; s++)
+    {
+      gboolean second = s > 0 && r->sub_ring[s - 1] == r->sub_ring[s];
+      gboolean first_of_two = s + 1 < r->n_subs && r->sub_ring[s + 1] == r->sub_ring[s];
+      int      f = r->sub_face[s];
+      m->subs[s].group = r->sub_group[s];
+      m->subs[s].position = r->sub_ring[s] + 1;
+      m->subs[s].face = f >= 0 ? f : second ? CW_FACE_DOWN : CW_FACE_UP;
+      if (second)
+        {
+          if (m->subs[s - 1].face > m->subs[s].face)
+            {
+              CwSubstituent t = m->subs[s - 1];
+              m->subs[s - 1] = m->subs[s];
+              m->subs[s] = t;
+            }
+          continue;
+        }
+      /* a stereocentre: one group (and an H), or two different groups */
+      if (!first_of_two || cw_sm_group_rank (r->sub_group[s]) != cw_sm_group_rank (r->sub_group[s + 1]))
+        {
+          n_rel++;
+          open |= f < 0;
+        }
+    }
+  if (n_rel >= 2 && open)
+    return FALSE;
+  cw_sm_canonicalize (m, n_rel < 2);
+  return TRUE;
 }
 
 int
@@ -316,7 +384,7 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
   Scan     sc;
   Reading *r;
   int      first = -1, n;
-  gboolean tail, prefix;
+  gboolean tail, prefix, cyclohexyl = FALSE;
 
   if (len > G_MAXUINT16 || !scan (&sc, text, len))
     return 0;
@@ -386,17 +454,17 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
       if (k == 0 && prefix)
         {
           const ChainAtom *root = &sc.chain[first - 1];
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[0].pos, a->pos, root->pos - sc.chain[0].pos);
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[0].pos, a->pos, root->pos - sc.chain[0].pos, &cyclohexyl);
           r->sub_ring[r->n_subs++] = k;
         }
       for (int b = a->first_branch; b < a->first_branch + a->n_branch; b++)
         {
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0);
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0, &cyclohexyl);
           r->sub_ring[r->n_subs++] = k;
         }
       if (k == 5 && tail)
         {
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[first + 6].pos, len, 0);
+          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[first + 6].pos, len, 0, &cyclohexyl);
           r->sub_ring[r->n_subs++] = k;
         }
       n_here = r->n_subs - s0;
@@ -446,7 +514,18 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
           r->sub_face[s0 + 1] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
       }
     }
+  /* a cyclohexyl group's ring is a second candidate ring with one substituent: ours is the
+   * one analysed when it has more than one; with one, the general reader takes the first of the
+   * two equal rings (the same molecule either way) and says so in the notes */
+  if (cyclohexyl && r->n_subs == 1 && notes)
+    return 0;
   info->n_dropped = 0;
+  if (max_out >= 1 && !(r->inner_stereo && notes) && one_molecule (r, &out[0]))
+    {
+      info->n_open = 0;
+      info->n_molecules = 1;
+      return 1;
+    }
   n = cw_sm_make_molecules (r, out, max_out, info, notes, NULL);
   if (n <= 0)
     {

@@ -81,16 +81,37 @@ cw_sm_frag_key (const char *text, int lo, int hi, int root_off)
   return key;
 }
 
+/* Two-way sets: the entry for the key among the set's two, or NULL. */
 static inline CwSmFragCacheEntry *
-cw_sm_frag_slot (CwSmFragCacheEntry *cache, guint64 key)
+cw_sm_frag_set (CwSmFragCacheEntry *cache, guint64 key)
 {
-  return &cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 1)];
+  return &cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 2)];
 }
 
 static inline gboolean
 cw_sm_frag_entry_is (const CwSmFragCacheEntry *e, guint64 key, const char *text, int lo, int hi, int root_off)
 {
   return e->key == key && e->len == hi - lo && e->root_off == root_off && memcmp (e->text, text + lo, hi - lo) == 0;
+}
+
+static inline CwSmFragCacheEntry *
+cw_sm_frag_find (CwSmFragCacheEntry *cache, guint64 key, const char *text, int lo, int hi, int root_off)
+{
+  CwSmFragCacheEntry *set = cw_sm_frag_set (cache, key);
+  if (cw_sm_frag_entry_is (&set[0], key, text, lo, hi, root_off))
+    return &set[0];
+  if (cw_sm_frag_entry_is (&set[1], key, text, lo, hi, root_off))
+    return &set[1];
+  return NULL;
+}
+
+/* A fresh entry for key: the set's newer entry moves to the second place. */
+static inline CwSmFragCacheEntry *
+cw_sm_frag_insert (CwSmFragCacheEntry *cache, guint64 key)
+{
+  CwSmFragCacheEntry *set = cw_sm_frag_set (cache, key);
+  set[1] = set[0];
+  return &set[0];
 }
 
 typedef struct
@@ -142,6 +163,8 @@ typedef struct
  * mirror: also allow the face swap alone (relative configuration: enantiomers count as one). */
 void cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransform *out);
 void cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecule *out);
+/* Renumbers mol canonically in place (custom_groups untouched). */
+void cw_sm_canonicalize (CwMolecule *mol, gboolean mirror);
 /* Writes a key of the molecule under t into key[CW_SM_KEY_LEN]; equal keys mean equal molecules. */
 #define CW_SM_KEY_LEN 13
 void cw_sm_molecule_key (const CwMolecule *mol, const CwRingTransform *t, gint64 key[CW_SM_KEY_LEN]);
@@ -167,6 +190,8 @@ int cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZ
 /* The group table read as fragments (cw-smiles.c): rooted hash -> group, and each group's
  * fragment written from its attachment atom (fwd) and towards it (rev), ring digits from 2. */
 #define CW_SM_INDEX_SLOTS 1024
+#define CW_SM_RING_CYCLOHEXYL 1 /* the fragment is a plain cyclohexyl */
+#define CW_SM_RING_OTHER 2
 typedef struct
 {
   const CwGroupTable *table;
@@ -175,7 +200,7 @@ typedef struct
   char              **fwd;
   char              **rev;
   guint8             *fwd_len, *rev_len; /* strlen of fwd/rev (0 when NULL or longer than 255) */
-  guint8             *ring_inside;       /* the group's fragment has a ring that is not aromatic */
+  guint8             *ring_inside;       /* CW_SM_RING_*: a ring in the group's fragment that is not aromatic */
   guint64             slot_hash[CW_SM_INDEX_SLOTS];
   gint16              slot_group[CW_SM_INDEX_SLOTS];
   GString            *problems; /* groups whose fragment could not be read, one per line */

@@ -405,9 +405,9 @@ lookup_fragment (Reading *r, int root, guint8 mark, const int *atoms, int n)
     {
       int     root_off = g->atoms[root].pos - lo;
       guint64 key = cw_sm_frag_key (g->text, lo, hi, root_off);
-      e = cw_sm_frag_slot (g->frag_cache, key);
-      if (cw_sm_frag_entry_is (e, key, g->text, lo, hi, root_off))
+      if ((e = cw_sm_frag_find (g->frag_cache, key, g->text, lo, hi, root_off)) != NULL)
         return e->group;
+      e = cw_sm_frag_insert (g->frag_cache, key);
       e->key = key;
       e->len = hi - lo;
       e->root_off = g->atoms[root].pos - lo;
@@ -574,19 +574,6 @@ fill_molecule (const Reading *r, guint open_bits, const int *open_ring, int n_op
       }
 }
 
-static void
-canonicalize (CwMolecule *m, int n_relevant)
-{
-  CwRingTransform t;
-  CwMolecule      tmp;
-
-  cw_sm_canonical_transform (m, n_relevant < 2, &t);
-  tmp.custom_groups = NULL;
-  cw_sm_apply_transform (m, &t, &tmp);
-  memcpy (m->subs, tmp.subs, sizeof (CwSubstituent) * tmp.n_subs);
-  m->n_subs = tmp.n_subs;
-}
-
 int
 cw_sm_make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *info, GString *notes, GError **error)
 {
@@ -638,7 +625,7 @@ cw_sm_make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *in
                            _("more cis/trans isomers than fit (%d)"), max_out);
           return -1;
         }
-      canonicalize (&m, n_rel); /* open faces do not change which carbons are relevant */
+      cw_sm_canonicalize (&m, n_rel < 2); /* open faces do not change which carbons are relevant */
       out[n_out].n_subs = m.n_subs;
       out[n_out].custom_groups = NULL;
       memcpy (out[n_out].subs, m.subs, sizeof (CwSubstituent) * m.n_subs);

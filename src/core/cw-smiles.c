@@ -124,7 +124,22 @@ cw_sm_index_new (const CwGroupTable *table)
           continue;
         }
       for (int c = 0; c < g->n_closures; c++)
-        index->ring_inside[i] |= !g->atoms[g->closures[c].a].aromatic || !g->atoms[g->closures[c].b].aromatic;
+        if (!g->atoms[g->closures[c].a].aromatic || !g->atoms[g->closures[c].b].aromatic)
+          index->ring_inside[i] = CW_SM_RING_OTHER;
+      if (index->ring_inside[i] && g->n_atoms == 6 && g->n_closures == 1)
+        {
+          /* a plain cyclohexyl: six saturated carbons in one ring, nothing else */
+          gboolean plain = TRUE;
+          for (int a = 0; a < 6 && plain; a++)
+            {
+              const CwSmAtom *x = &g->atoms[a];
+              plain = x->element == 6 && !x->aromatic && x->charge == 0 && x->isotope == 0 && x->degree == 2;
+              for (int k = 0; k < x->degree && plain; k++)
+                plain = x->bond[k] == CW_SM_BOND_SINGLE;
+            }
+          if (plain)
+            index->ring_inside[i] = CW_SM_RING_CYCLOHEXYL;
+        }
       fragment_strings (g, mask, 2, &index->fwd[i], &index->rev[i]);
       if (index->fwd[i] && strlen (index->fwd[i]) < 256)
         index->fwd_len[i] = strlen (index->fwd[i]);

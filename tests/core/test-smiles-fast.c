@@ -30,15 +30,17 @@ typedef struct
   char        *error;
 } Result;
 
+/* with_notes FALSE reads as the batch does, without notes (the fast path then also takes a
+ * lone cyclohexyl group) */
 static void
-read_into (CwSmilesReader *reader, const char *text, Result *r)
+read_into (CwSmilesReader *reader, const char *text, gboolean with_notes, Result *r)
 {
   g_autoptr (GError) error = NULL;
 
   g_string_truncate (r->notes, 0);
   g_clear_pointer (&r->error, g_free);
   memset (&r->info, 0, sizeof r->info);
-  r->n = cw_smiles_reader_read (reader, text, -1, r->mols, MAX_OUT, &r->info, r->notes, &error);
+  r->n = cw_smiles_reader_read (reader, text, -1, r->mols, MAX_OUT, &r->info, with_notes ? r->notes : NULL, &error);
   if (r->n < 0)
     {
       g_assert_nonnull (error);
@@ -237,10 +239,11 @@ compare_on (const char *const *texts, int n_texts, GRand *rand, int n_generated,
           text = s->str;
         }
       /* twice: the first reading of a spelling fills the fragment cache */
-      read_into (fast, text, &a);
-      read_into (general, text, &b);
+      gboolean with_notes = i % 2 == 0;
+      read_into (fast, text, with_notes, &a);
+      read_into (general, text, with_notes, &b);
       assert_same (text, &a, &b);
-      read_into (fast, text, &c);
+      read_into (fast, text, with_notes, &c);
       assert_same (text, &c, &b);
       n_ok += b.n > 0;
     }
@@ -267,6 +270,9 @@ test_edges (void)
     "C([H])([H])([H])[C@H]1CC[C@@H](C)CC1", "C1CCCCC1(C)C(C)C", "Cl[C@H]1CCCC[C@@H]1Br", "CC1CC(C)C(C)C(C)C1",
     "C[C@H]1[C@@H](C)[C@H](C)[C@@H](C)[C@H](C)[C@@H]1C", "N#C[C@H]1CC[C@H](C#N)CC1", "[CH3][C@H]1CCCCC1",
     "C[C@H]1CC[C@@H](C)CC1C1CCCCC1", "C1CCCCC1(", "C1CCCCC1)", "C1CCCCC", "C1CCCCC1[", "(C)C1CCCCC1",
+    "C9CCCCC9(C1CCCCC1)", "C9CCCCC9(C1CCCCC1)", "C9CC[C@H](C1CCCCC1)CC9", "C9CC[C@H](C1CCCCC1)CC9",
+    "C9C[C@H](C1CCCCC1)C[C@@H](C1CCCCC1)C9", "C9C[C@H](C1CCCCC1)C[C@@H](C1CCCCC1)C9",
+    "C9CC[C@H](C1CCC(C)CC1)CC9", "C9CC[C@H](C1CCC(C)CC1)CC9", "C9CC[C@@H](C1CCCC1)CC9", "C9CC[C@@H](C1CCCC1)CC9",
   };
   guint64 n_fast;
   int     n_ok;
