@@ -81,11 +81,14 @@ cw_sm_frag_key (const char *text, int lo, int hi, int root_off)
   return key;
 }
 
-/* Two-way sets: the entry for the key among the set's two, or NULL. */
+/* Sets of CW_SM_FRAG_WAYS entries, chosen by the high bits of the key times a large odd
+ * number (short texts' keys differ little in their low bits). */
+#define CW_SM_FRAG_WAYS 4
 static inline CwSmFragCacheEntry *
 cw_sm_frag_set (CwSmFragCacheEntry *cache, guint64 key)
 {
-  return &cache[(key ^ (key >> 31)) & (CW_SM_FRAG_CACHE - 2)];
+  G_STATIC_ASSERT (CW_SM_FRAG_CACHE / CW_SM_FRAG_WAYS == 128);
+  return &cache[((key * 0x9e3779b97f4a7c15ull) >> 57) * CW_SM_FRAG_WAYS];
 }
 
 static inline gboolean
@@ -94,23 +97,24 @@ cw_sm_frag_entry_is (const CwSmFragCacheEntry *e, guint64 key, const char *text,
   return e->key == key && e->len == hi - lo && e->root_off == root_off && memcmp (e->text, text + lo, hi - lo) == 0;
 }
 
+/* The entry for text[lo, hi) rooted at root_off, or NULL. */
 static inline CwSmFragCacheEntry *
 cw_sm_frag_find (CwSmFragCacheEntry *cache, guint64 key, const char *text, int lo, int hi, int root_off)
 {
   CwSmFragCacheEntry *set = cw_sm_frag_set (cache, key);
-  if (cw_sm_frag_entry_is (&set[0], key, text, lo, hi, root_off))
-    return &set[0];
-  if (cw_sm_frag_entry_is (&set[1], key, text, lo, hi, root_off))
-    return &set[1];
+  for (int w = 0; w < CW_SM_FRAG_WAYS; w++)
+    if (cw_sm_frag_entry_is (&set[w], key, text, lo, hi, root_off))
+      return &set[w];
   return NULL;
 }
 
-/* A fresh entry for key: the set's newer entry moves to the second place. */
+/* A fresh entry for key, first in its set: the others move one place down and the oldest
+ * leaves. */
 static inline CwSmFragCacheEntry *
 cw_sm_frag_insert (CwSmFragCacheEntry *cache, guint64 key)
 {
   CwSmFragCacheEntry *set = cw_sm_frag_set (cache, key);
-  set[1] = set[0];
+  memmove (&set[1], &set[0], sizeof (CwSmFragCacheEntry) * (CW_SM_FRAG_WAYS - 1));
   return &set[0];
 }
 
