@@ -98,8 +98,9 @@ static const char digit_pairs[201] = "000102030405060708091011121314151617181920
                                      "8081828384858687888990919293949596979899";
 
 /* Fixed-point with `decimals` digits (0..6), halves rounded away from zero; printf for huge or
- * odd values. */
-static int
+ * odd values. Inlined, so that each call's constant `decimals` turns the divisions into
+ * multiplications. */
+static inline G_ALWAYS_INLINE int
 fmt_fixed (char *buf, double x, int decimals)
 {
   static const double  scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
@@ -596,8 +597,18 @@ process_line (Batch *b, char *line, gsize len)
   else
     {
       gsize i = 0;
-      while (i < len && !g_ascii_isspace (line[i]))
-        i++;
+      for (;;)
+        {
+          /* SMILES characters are all above the space; stop at the first white space */
+          while (i < len && (guchar) line[i] > ' ')
+            i++;
+          if (i < len && !g_ascii_isspace (line[i]))
+            {
+              i++;
+              continue;
+            }
+          break;
+        }
       slen = i;
       id = line + i, ilen = len - i;
       trim (&id, &ilen);

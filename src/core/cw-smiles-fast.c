@@ -443,7 +443,8 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
     {
       const ChainAtom *a = &sc.chain[first + k];
       int              degree = 2 + a->n_branch + (k == 0 && prefix) + (k == 5 && tail), s0 = r->n_subs;
-      int              w[4], nw = 0, n_here;
+      int              n_here;
+      gboolean         clockwise;
 
       if (degree > 4 || (a->kind == RING_BRACKET && degree + a->hcount != 4))
         return 0;
@@ -478,37 +479,30 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
         continue;
       /* the neighbour order @/@@ refers to (previous ring carbon 0, next 1, first group 2,
        * second group or H 3): the bond to the atom before, the H, the ring bond, the
-       * branches, the atom after */
-      if (k > 0)
-        w[nw++] = 0;
-      else if (prefix)
-        w[nw++] = 2;
-      if (a->hcount > 0)
-        w[nw++] = 3;
-      if (k == 0)
-        w[nw++] = 0;
-      else if (k == 5)
-        w[nw++] = 1;
-      for (int b = 0; b < a->n_branch; b++)
-        w[nw++] = (k == 0 && prefix) || b > 0 ? 3 : 2;
-      if (k < 5)
-        w[nw++] = 1;
-      else if (tail)
-        w[nw++] = a->n_branch > 0 ? 3 : 2;
+       * branches, the atom after; two bits a neighbour */
       {
-        guint seen = 0;
-        int   inversions = 0;
-        gboolean clockwise;
-        if (nw != 4)
+        guint code = 0, nw = 0, parity;
+#define PUT(sym) (code |= (guint) (sym) << (2 * nw), nw++)
+        if (k > 0)
+          PUT (0);
+        else if (prefix)
+          PUT (2);
+        if (a->hcount > 0)
+          PUT (3);
+        if (k == 0)
+          PUT (0);
+        else if (k == 5)
+          PUT (1);
+        for (int b = 0; b < a->n_branch; b++)
+          PUT ((k == 0 && prefix) || b > 0 ? 3 : 2);
+        if (k < 5)
+          PUT (1);
+        else if (tail)
+          PUT (a->n_branch > 0 ? 3 : 2);
+#undef PUT
+        if (nw != 4 || (parity = cw_sm_permutation_parity[code & 0xff]) == 0)
           continue;
-        for (int x = 0; x < 4; x++)
-          seen |= 1u << w[x];
-        if (seen != 0xf)
-          continue;
-        for (int x = 0; x < 4; x++)
-          for (int y = x + 1; y < 4; y++)
-            inversions += w[x] > w[y];
-        clockwise = (a->chirality == CW_SM_CHIRAL_CLOCKWISE) == (inversions % 2 == 0);
+        clockwise = (a->chirality == CW_SM_CHIRAL_CLOCKWISE) == (parity == 2);
         r->sub_face[s0] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
         if (n_here == 2)
           r->sub_face[s0 + 1] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;

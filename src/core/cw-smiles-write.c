@@ -21,15 +21,10 @@ enum
 };
 
 /* Parity of a permutation of {PREV, NEXT, UP, DOWN}: TRUE when even. */
-static gboolean
+static inline gboolean
 even_permutation (const int w[4])
 {
-  int inversions = 0;
-
-  for (int i = 0; i < 4; i++)
-    for (int j = i + 1; j < 4; j++)
-      inversions += w[i] > w[j];
-  return inversions % 2 == 0;
+  return cw_sm_permutation_parity[w[0] | w[1] << 2 | w[2] << 4 | w[3] << 6] == 2;
 }
 
 /* Seen from the up face with positions running clockwise (as every drawing shows them), the
