@@ -46,6 +46,49 @@ cw_window_render_options (CwWindow        *self,
       }
 }
 
+static GtkDrawingArea *
+figure_area (CwWindow *self,
+             CwFigure  fig)
+{
+  switch (fig)
+    {
+    case CW_FIGURE_CHAIRS:
+      return self->chairs_area;
+    case CW_FIGURE_PROFILE:
+      return self->profile_area;
+    case CW_FIGURE_SCAN:
+      return self->scan_area;
+    case CW_FIGURE_STRUCTURE:
+    default:
+      g_return_val_if_reached (NULL);
+    }
+}
+
+static guint
+figure_slot (CwFigure fig)
+{
+  return fig == CW_FIGURE_CHAIRS ? 0 : fig == CW_FIGURE_PROFILE ? 1 : 2;
+}
+
+/* The figure as it would be drawn now into the area's box; NULL when nothing is drawn. */
+static CwScene *
+figure_scene (CwWindow       *self,
+              GtkDrawingArea *area,
+              CwFigure        fig,
+              int             width,
+              int             height,
+              gboolean       *dark)
+{
+  CwRenderOptions opt;
+
+  cw_window_render_options (self, GTK_WIDGET (area), &opt);
+  *dark = opt.dark;
+  if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
+    return NULL;
+  return cw_render_figure_scene (fig, self->data, cw_document_peek_molecule (self->doc),
+                                 self->an_valid ? &self->an : NULL, &opt, width, height);
+}
+
 static void
 draw_figure (CwWindow       *self,
              GtkDrawingArea *area,
@@ -54,13 +97,57 @@ draw_figure (CwWindow       *self,
              int             width,
              int             height)
 {
-  CwRenderOptions opt;
+  guint    slot = figure_slot (fig);
+  gboolean dark;
+  CwScene *scene = figure_scene (self, area, fig, width, height, &dark);
 
-  if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
-    return;
-  cw_window_render_options (self, GTK_WIDGET (area), &opt);
-  cw_render_figure (cr, fig, self->data, cw_document_peek_molecule (self->doc),
-                    self->an_valid ? &self->an : NULL, &opt, width, height);
+  cw_render_figure_paint (cr, scene, dark, width, height);
+  /* Kept to tell, at the next change, whether this figure needs drawing again. */
+  g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
+  self->figure_drawn[slot] = scene;
+  self->figure_drawn_valid[slot] = TRUE;
+  self->figure_drawn_dark[slot] = dark;
+  self->figure_drawn_width[slot] = width;
+  self->figure_drawn_height[slot] = height;
+}
+
+/* After a change: redraw the figures that now look different, and only those. A figure
+ * that is not shown, or not drawn yet, is simply queued. */
+void
+cw_window_queue_figures (CwWindow *self)
+{
+  static const CwFigure figs[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
+
+  for (guint i = 0; i < G_N_ELEMENTS (figs); i++)
+    {
+      GtkDrawingArea *area = figure_area (self, figs[i]);
+      guint           slot = figure_slot (figs[i]);
+      int             width = gtk_widget_get_width (GTK_WIDGET (area));
+      int             height = gtk_widget_get_height (GTK_WIDGET (area));
+      gboolean        same = FALSE;
+
+      if (self->figure_drawn_valid[slot] && gtk_widget_get_mapped (GTK_WIDGET (area)) &&
+          width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot])
+        {
+          gboolean          dark;
+          g_autoptr (CwScene) scene = figure_scene (self, area, figs[i], width, height, &dark);
+
+          same = dark == self->figure_drawn_dark[slot] && cw_scene_equal (scene, self->figure_drawn[slot]);
+        }
+      if (!same)
+        gtk_widget_queue_draw (GTK_WIDGET (area));
+    }
+}
+
+/* Forgets the figures as drawn: the next change redraws all three. */
+void
+cw_window_clear_figures (CwWindow *self)
+{
+  for (guint i = 0; i < G_N_ELEMENTS (self->figure_drawn); i++)
+    {
+      g_clear_pointer (&self->figure_drawn[i], cw_scene_free);
+      self->figure_drawn_valid[i] = FALSE;
+    }
 }
 
 void

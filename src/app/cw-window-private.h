@@ -68,6 +68,14 @@ struct _CwWindow
   GPtrArray *term_cells; /* GtkLabel*, 4 per grid row, row 0 the header */
   GPtrArray *flag_rows;  /* GtkGrid* holding a GtkImage and a GtkLabel */
 
+  /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
+   * figure as it was does not redraw it */
+  CwScene *figure_drawn[3];
+  gboolean figure_drawn_valid[3];
+  gboolean figure_drawn_dark[3];
+  int      figure_drawn_width[3];
+  int      figure_drawn_height[3];
+
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */
   CwAnalysis    an;
@@ -118,6 +126,8 @@ gboolean cw_window_set_smiles (CwWindow   *self,
                                GError    **error);
 
 /* cw-window-draw.c: the figures on screen (through the render layer). */
+void cw_window_queue_figures (CwWindow *self);
+void cw_window_clear_figures (CwWindow *self);
 void cw_window_draw_chairs_cb (GtkDrawingArea *area,
                                cairo_t        *cr,
                                int             width,

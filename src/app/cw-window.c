@@ -134,9 +134,7 @@ cw_window_refresh (CwWindow *self)
   cw_window_update_edit_actions (self);
   cw_window_update_smiles (self);
   cw_window_update_pages (self);
-  gtk_widget_queue_draw (GTK_WIDGET (self->chairs_area));
-  gtk_widget_queue_draw (GTK_WIDGET (self->profile_area));
-  gtk_widget_queue_draw (GTK_WIDGET (self->scan_area));
+  cw_window_queue_figures (self);
 }
 
 void
@@ -379,6 +377,7 @@ cw_window_finalize (GObject *object)
   g_clear_pointer (&self->reactivity, g_free);
   g_clear_pointer (&self->isomers, cw_isomer_set_free);
   g_clear_pointer (&self->flag_rows, g_ptr_array_unref);
+  cw_window_clear_figures (self);
 
   G_OBJECT_CLASS (cw_window_parent_class)->finalize (object);
 }

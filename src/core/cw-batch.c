@@ -156,6 +156,29 @@ fmt_fixed (char *buf, double x, int decimals)
   return n;
 }
 
+/* A line number. */
+static inline int
+fmt_uint (char *buf, guint64 v)
+{
+  char tmp[24];
+  int  t = sizeof tmp;
+
+  while (v >= 100)
+    {
+      guint64 q = v / 100;
+      t -= 2;
+      memcpy (tmp + t, digit_pairs + 2 * (v - q * 100), 2);
+      v = q;
+    }
+  if (v >= 10)
+    t -= 2, memcpy (tmp + t, digit_pairs + 2 * v, 2);
+  else
+    tmp[--t] = '0' + v;
+  memcpy (buf, tmp + t, sizeof tmp - t);
+  buf[sizeof tmp - t] = '\0';
+  return sizeof tmp - t;
+}
+
 /* Four significant digits: fixed between 1e-3 and 1e6, else d.ddde±N. */
 static int
 fmt_sig (char *buf, double x)
@@ -384,8 +407,8 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
 static void
 row_start (Batch *b, guint64 line, const char *id, gsize id_len)
 {
-  char buf[32];
-  int  n = fmt_fixed (buf, (double) line, 0);
+  char buf[24];
+  int  n = fmt_uint (buf, line);
 
   if (b->opt->json)
     {

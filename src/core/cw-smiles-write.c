@@ -29,16 +29,21 @@ even_permutation (const int w[4])
 
 /* Seen from the up face with positions running clockwise (as every drawing shows them), the
  * order (previous ring carbon, next ring carbon, up group, down group) is anticlockwise, i.e. @. */
-static const char *
+/* The ring carbon's token: an index into tokens[]. */
+static const char tokens[5][8] = { "C", "[C@H]", "[C@@H]", "[C@]", "[C@@]" };
+static const guint8 token_len[5] = { 1, 5, 6, 4, 5 };
+
+static inline int
 ring_token (gboolean marked, int n_groups, const int w[4])
 {
-  gboolean clockwise = even_permutation (w);
+  gboolean clockwise;
 
   if (!marked)
-    return "C";
+    return 0;
+  clockwise = even_permutation (w);
   if (n_groups == 1)
-    return clockwise ? "[C@H]" : "[C@@H]";
-  return clockwise ? "[C@]" : "[C@@]";
+    return clockwise ? 1 : 2;
+  return clockwise ? 3 : 4;
 }
 
 /* The text of one group: written from its attachment atom (fwd) and towards it (rev, or NULL). */
@@ -95,10 +100,12 @@ put_c (Ctx *c, char ch)
   *c->p++ = ch;
 }
 
+/* Copies all eight bytes (the buffer has room for them) and moves on by the token's length. */
 static inline void
-put_token (Ctx *c, const char *token)
+put_token (Ctx *c, int token)
 {
-  put (c, token, strlen (token));
+  memcpy (c->p, tokens[token], 8);
+  c->p += token_len[token];
 }
 
 static inline void
@@ -142,10 +149,7 @@ write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
   if (p < CW_RING_SIZE)
     {
       int w1[4] = { PREV, h, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
-      if (n)
-        put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
-      else
-        put_c (c, 'C');
+      put_token (c, n ? ring_token (marked, n, n == 2 ? w2 : w1) : 0);
       for (int k = 0; k < 2; k++)
         if (slot[k] != NULL)
           put_branch (c, slot[k]);
@@ -154,10 +158,7 @@ write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
   {
     int w1[4] = { PREV, h, NEXT, f }, w2[4] = { PREV, NEXT, UP, DOWN };
     int written = 0;
-    if (n)
-      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
-    else
-      put_c (c, 'C');
+    put_token (c, n ? ring_token (marked, n, n == 2 ? w2 : w1) : 0);
     put_c (c, '1');
     for (int k = 0; k < 2; k++)
       if (slot[k] != NULL)
@@ -175,7 +176,7 @@ write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *rel
 {
   GroupText        text[CW_MAX_SUBS];
   const GroupText *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  gsize            start = out->len, bound = 6 * 8 + 4;
+  gsize            start = out->len, bound = 6 * 8 + 12; /* tokens are copied 8 bytes at a time */
   Ctx              c;
 
   for (int i = 0; i < m->n_subs; i++)

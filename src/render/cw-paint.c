@@ -205,7 +205,7 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
       break;
     case CW_PRIM_TEXT:
       {
-        g_autoptr (PangoLayout) layout = cw_text_layout_new (p->markup, p->size, p->bold, p->wrap);
+        g_autoptr (PangoLayout) layout = cw_text_layout_get (p->markup, p->size, p->bold, p->wrap);
 
         cairo_move_to (cr, p->box.x, p->box.y);
         pango_cairo_show_layout (cr, layout);

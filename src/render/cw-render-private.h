@@ -15,6 +15,9 @@ G_DEFINE_AUTOPTR_CLEANUP_FUNC (cairo_surface_t, cairo_surface_destroy)
 
 /* A layout from the shared measuring context, so painted text has the measured size. */
 PangoLayout *cw_text_layout_new (const char *markup, double size, gboolean bold, double wrap);
+/* The same layout from a per-thread cache of recently used texts (a new reference): callers
+ * must not change it. */
+PangoLayout *cw_text_layout_get (const char *markup, double size, gboolean bold, double wrap);
 
 /* Palette: colours for an ink in the light (print) or dark (screen) theme. */
 void cw_palette_get (CwInk ink, gboolean dark, double rgb[3]);

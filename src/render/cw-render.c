@@ -151,22 +151,38 @@ cw_render_build_figure (CwFigure               fig,
     }
 }
 
-void
-cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
+CwScene *
+cw_render_figure_scene (CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
 {
   double w0, h0, s;
-  g_autoptr (CwScene) scene = NULL;
 
-  g_return_if_fail (cr != NULL && mol != NULL && opt != NULL);
+  g_return_val_if_fail (mol != NULL && opt != NULL, NULL);
   if (width <= 1 || height <= 1)
-    return;
+    return NULL;
   /* Lay out at the design size or larger, then scale uniformly into the box, so text keeps its
    * proportions and the extra room goes to the figure. */
   cw_render_figure_size (fig, &w0, &h0);
   s = MIN (width / w0, height / h0);
-  scene = cw_render_build_figure (fig, data, mol, an, opt, width / s, height / s);
+  return cw_render_build_figure (fig, data, mol, an, opt, width / s, height / s);
+}
 
-  cw_render_paint_scene (cr, scene, opt->dark, width, height);
+void
+cw_render_figure_paint (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height)
+{
+  g_return_if_fail (cr != NULL);
+  if (scene == NULL || width <= 1 || height <= 1)
+    return;
+  cw_render_paint_scene (cr, scene, dark, width, height);
+}
+
+void
+cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol, const CwAnalysis *an, const CwRenderOptions *opt, double width, double height)
+{
+  g_autoptr (CwScene) scene = NULL;
+
+  g_return_if_fail (cr != NULL && mol != NULL && opt != NULL);
+  scene = cw_render_figure_scene (fig, data, mol, an, opt, width, height);
+  cw_render_figure_paint (cr, scene, opt->dark, width, height);
 }
 
 void

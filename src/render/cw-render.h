@@ -5,6 +5,7 @@
 #include "cw-core.h"
 #include "cw-couplings.h"
 #include "cw-reactivity.h"
+#include "cw-scene.h"
 
 G_BEGIN_DECLS
 
@@ -51,6 +52,12 @@ void        cw_render_options_init (CwRenderOptions *opt);
  * found. an may be NULL for the structure figure. */
 void        cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, const CwMolecule *mol,
                               const CwAnalysis *an, const CwRenderOptions *opt, double width, double height);
+/* cw_render_figure in two steps, for a window that redraws a figure only when it changed:
+ * the figure laid out for the box (NULL when the box is empty; free with cw_scene_free, compare
+ * with cw_scene_equal), then painted into it. */
+CwScene    *cw_render_figure_scene (CwFigure fig, const CwData *data, const CwMolecule *mol,
+                                    const CwAnalysis *an, const CwRenderOptions *opt, double width, double height);
+void        cw_render_figure_paint (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height);
 /* Format from the extension (.png, .svg, .pdf); atomic: temporary file, then rename. dpi is used
  * for PNG only. Always on white. */
 gboolean    cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc,

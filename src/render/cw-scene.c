@@ -39,6 +39,42 @@ cw_scene_free (CwScene *scene)
   g_free (scene);
 }
 
+static gboolean
+prim_equal (const CwPrim *a, const CwPrim *b)
+{
+  return a->kind == b->kind && a->role == b->role && a->ink == b->ink && a->chair == b->chair &&
+         a->sub == b->sub && a->position == b->position && a->axial == b->axial && a->x0 == b->x0 &&
+         a->y0 == b->y0 && a->x1 == b->x1 && a->y1 == b->y1 && a->line_width == b->line_width &&
+         a->wide == b->wide && a->dash == b->dash && a->fill == b->fill && a->halo == b->halo &&
+         a->halo_ink == b->halo_ink && a->marker == b->marker && a->first_point == b->first_point &&
+         a->n_points == b->n_points && g_strcmp0 (a->markup, b->markup) == 0 && a->size == b->size &&
+         a->bold == b->bold && a->wrap == b->wrap && a->box.x == b->box.x && a->box.y == b->box.y &&
+         a->box.w == b->box.w && a->box.h == b->box.h;
+}
+
+gboolean
+cw_scene_equal (const CwScene *a, const CwScene *b)
+{
+  if (a == b)
+    return TRUE;
+  if (a == NULL || b == NULL)
+    return FALSE;
+  if (a->width != b->width || a->height != b->height || a->origin_x != b->origin_x ||
+      a->origin_y != b->origin_y || a->prims->len != b->prims->len || a->points->len != b->points->len)
+    return FALSE;
+  for (guint i = 0; i < a->points->len; i++)
+    {
+      const CwPoint *p = &g_array_index (a->points, CwPoint, i), *q = &g_array_index (b->points, CwPoint, i);
+
+      if (p->x != q->x || p->y != q->y)
+        return FALSE;
+    }
+  for (guint i = 0; i < a->prims->len; i++)
+    if (!prim_equal (&g_array_index (a->prims, CwPrim, i), &g_array_index (b->prims, CwPrim, i)))
+      return FALSE;
+  return TRUE;
+}
+
 CwPrim *
 cw_scene_add (CwScene *scene, CwPrimKind kind, CwRole role, CwInk ink)
 {
@@ -317,6 +353,66 @@ cw_text_layout_new (const char *markup, double size, gboolean bold, double wrap)
   return layout;
 }
 
+/* Laid-out texts, per thread, so painting the same label again (every frame of the
+ * window, every band of a PNG) does not shape it again. Two generations: a text used
+ * since the last turnover stays; the older generation is dropped at each turnover. */
+#define LAYOUT_GENERATION 256
+
+typedef struct
+{
+  GHashTable *current;
+  GHashTable *previous;
+} LayoutCache;
+
+static void
+layout_cache_free (gpointer data)
+{
+  LayoutCache *c = data;
+
+  g_hash_table_unref (c->current);
+  g_hash_table_unref (c->previous);
+  g_free (c);
+}
+
+static GHashTable *
+layout_table_new (void)
+{
+  return g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_object_unref);
+}
+
+PangoLayout *
+cw_text_layout_get (const char *markup, double size, gboolean bold, double wrap)
+{
+  static GPrivate  key = G_PRIVATE_INIT (layout_cache_free);
+  LayoutCache     *c = g_private_get (&key);
+  g_autofree char *k = g_strdup_printf ("%g|%d|%g|%s", size, bold, wrap, markup);
+  PangoLayout     *layout;
+
+  if (c == NULL)
+    {
+      c = g_new0 (LayoutCache, 1);
+      c->current = layout_table_new ();
+      c->previous = layout_table_new ();
+      g_private_set (&key, c);
+    }
+  layout = g_hash_table_lookup (c->current, k);
+  if (layout != NULL)
+    return g_object_ref (layout);
+  layout = g_hash_table_lookup (c->previous, k);
+  if (layout != NULL)
+    g_object_ref (layout);
+  else
+    layout = cw_text_layout_new (markup, size, bold, wrap);
+  if (g_hash_table_size (c->current) >= LAYOUT_GENERATION)
+    {
+      g_hash_table_unref (c->previous);
+      c->previous = c->current;
+      c->current = layout_table_new ();
+    }
+  g_hash_table_insert (c->current, g_steal_pointer (&k), g_object_ref (layout));
+  return layout;
+}
+
 /* Measurements repeat a lot (every try of every label): keep them, per thread. */
 static GHashTable *
 measure_cache (void)
@@ -344,7 +440,7 @@ cw_text_measure (const char *markup, double size, gboolean bold, double wrap, in
       *out = *hit;
       return;
     }
-  g_autoptr (PangoLayout) layout = cw_text_layout_new (markup, size, bold, wrap);
+  g_autoptr (PangoLayout) layout = cw_text_layout_get (markup, size, bold, wrap);
   PangoRectangle logical;
 
   pango_layout_get_extents (layout, NULL, &logical);

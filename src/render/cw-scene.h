@@ -125,6 +125,8 @@ CwPrim *cw_scene_text (CwScene *scene, CwRole role, CwInk ink, const char *marku
 CwPrim *cw_scene_text_at (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, gboolean bold, double x, double y, double ax, double ay);
 CwPrim *cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *markup, double size, double x, double y, double wrap);
 CwPrim *cw_scene_get (const CwScene *scene, guint i);
+/* TRUE when both scenes would paint the same (every prim, point and text alike). */
+gboolean cw_scene_equal (const CwScene *a, const CwScene *b);
 /* Copies every prim of src into scene, moved by (dx, dy). */
 void  cw_scene_append (CwScene *scene, const CwScene *src, double dx, double dy);
 guint cw_scene_get_n (const CwScene *scene);
