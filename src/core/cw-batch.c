@@ -271,6 +271,15 @@ append_configuration (const CwMolecule *m, GString *s)
     }
 }
 
+#define put_lit(q, lit) (memcpy ((q), (lit), sizeof (lit) - 1), (q) + sizeof (lit) - 1)
+
+static inline char *
+put_sep (char *q)
+{
+  *q++ = ',';
+  return q;
+}
+
 /* The part of a row that depends only on the molecule: SMILES … flags. */
 static void
 format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
@@ -279,23 +288,22 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
   guint32     seen = 0;
   int         n_flags = 0;
   gboolean    json = b->opt->json;
-  const char *sep = ",";
 
   /* the numbers go into one local buffer and then into s in one piece */
   q += fmt_fixed (q, an->delta_g, 3);
-  q = g_stpcpy (q, json ? ",\"sigma\":" : sep);
+  q = json ? put_lit (q, ",\"sigma\":") : put_sep (q);
   q += fmt_fixed (q, an->sigma, 3);
-  q = g_stpcpy (q, json ? ",\"K\":" : sep);
+  q = json ? put_lit (q, ",\"K\":") : put_sep (q);
   q += fmt_sig (q, an->K);
-  q = g_stpcpy (q, json ? ",\"populations\":[" : sep);
+  q = json ? put_lit (q, ",\"populations\":[") : put_sep (q);
   q += fmt_fixed (q, an->pop[0], 4);
   *q++ = ',';
   q += fmt_fixed (q, an->pop[1], 4);
-  q = g_stpcpy (q, json ? "],\"major_interval\":[" : sep);
+  q = json ? put_lit (q, "],\"major_interval\":[") : put_sep (q);
   q += fmt_fixed (q, an->pop_low[an->major], 4);
   *q++ = ',';
   q += fmt_fixed (q, an->pop_high[an->major], 4);
-  q = g_stpcpy (q, json ? "],\"flags\":[" : sep);
+  q = json ? put_lit (q, "],\"flags\":[") : put_sep (q);
   if (json)
     {
       cw_str_puts (s, "\"smiles\":\"");
@@ -351,11 +359,12 @@ molecule_key (const CwMolecule *m, gint64 key[CW_SM_KEY_LEN])
   return TRUE;
 }
 
+/* Over the words molecule_key uses (the rest are zero). */
 static guint64
 key_hash (const gint64 *key)
 {
   guint64 h = 0x9e3779b97f4a7c15ull;
-  for (int i = 0; i < CW_SM_KEY_LEN; i++)
+  for (int i = 0, n = 1 + (int) (key[0] + 1) / 2; i < n; i++)
     h = (h ^ (guint64) key[i]) * 0x100000001b3ull;
   return (h ^ (h >> 29)) | 1; /* 0 marks an empty tag */
 }
@@ -622,7 +631,16 @@ process_line (Batch *b, char *line, gsize len)
       gsize i = 0;
       for (;;)
         {
-          /* SMILES characters are all above the space; stop at the first white space */
+          /* SMILES characters are all above the space; stop at the first white space. Eight
+           * bytes a step while none of them is at or below the space. */
+          while (i + 8 <= len)
+            {
+              guint64 w;
+              memcpy (&w, line + i, 8);
+              if (((w - 0x2121212121212121ull) & ~w & 0x8080808080808080ull) != 0)
+                break;
+              i += 8;
+            }
           while (i < len && (guchar) line[i] > ' ')
             i++;
           if (i < len && !g_ascii_isspace (line[i]))
