@@ -426,7 +426,7 @@ chair_sum (const CwChair *c)
 }
 
 static void
-finish_thermo (CwEngine *e, CwFlagCode symmetry)
+finish_thermo (CwEngine *e, CwFlagCode symmetry, gboolean kinetics)
 {
   CwAnalysis *an = e->out;
   const CwRingEnergetics *ring = cw_interaction_table_get_ring (e->data->interactions);
@@ -463,10 +463,15 @@ finish_thermo (CwEngine *e, CwFlagCode symmetry)
   /* The transition state lies at least as high as the higher chair: a chair cannot leave faster
    * than kB·T/h. */
   an->barrier = MAX (an->barrier, fabs (an->delta_g));
-  an->k_forward = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[0].energy,
-                                       MAX (an->delta_g, 0.0)), T);
-  an->k_reverse = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[1].energy,
-                                       MAX (-an->delta_g, 0.0)), T);
+  if (kinetics)
+    {
+      an->k_forward = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[0].energy,
+                                           MAX (an->delta_g, 0.0)), T);
+      an->k_reverse = cw_eyring_rate (MAX (ring->half_chair.g + mean - an->chair[1].energy,
+                                           MAX (-an->delta_g, 0.0)), T);
+    }
+  else
+    an->k_forward = an->k_reverse = NAN;
   an->twist_boat = ring->twist_boat.g;
 }
 
@@ -499,9 +504,9 @@ check_molecule (const CwMolecule *mol, GError **error)
   return TRUE;
 }
 
-gboolean
-cw_analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, CwAnalysis *out,
-            GError **error)
+static gboolean
+analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, gboolean kinetics, CwAnalysis *out,
+         GError **error)
 {
   CwEngine e;
   CwFlagCode symmetry;
@@ -534,9 +539,23 @@ cw_analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond,
   symmetry = CW_N_FLAGS;
   if (fabs (chair_sum (&out->chair[0]) - chair_sum (&out->chair[1])) < 1e-9)
     symmetry = chair_symmetry (mol, out);
-  finish_thermo (&e, symmetry);
+  finish_thermo (&e, symmetry, kinetics);
   build_flags (&e, symmetry);
   return TRUE;
+}
+
+gboolean
+cw_analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, CwAnalysis *out,
+            GError **error)
+{
+  return analyze (data, mol, cond, TRUE, out, error);
+}
+
+gboolean
+cw_analyze_equilibrium (const CwData *data, const CwMolecule *mol, const CwConditions *cond, CwAnalysis *out,
+                        GError **error)
+{
+  return analyze (data, mol, cond, FALSE, out, error);
 }
 
 static const char *flag_codes[CW_N_FLAGS] = {

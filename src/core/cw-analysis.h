@@ -101,6 +101,13 @@ gboolean    cw_analyze (const CwData *data,
                         const CwConditions *cond,
                         CwAnalysis *out,
                         GError **error);
+/* The same without the ring-inversion rate constants (k_forward and k_reverse are NAN): what a
+ * batch of compounds needs. */
+gboolean    cw_analyze_equilibrium (const CwData *data,
+                                    const CwMolecule *mol,
+                                    const CwConditions *cond,
+                                    CwAnalysis *out,
+                                    GError **error);
 /* A(X) at T in the given solvent, with its sigma; *from_thermo tells whether dH/dS were used. */
 double      cw_group_a_value (const CwGroup *group, double t_kelvin, CwSolvent solvent, double *sigma, gboolean *from_thermo);
 gboolean    cw_analysis_has_flag (const CwAnalysis *an, CwFlagCode code);

@@ -381,7 +381,7 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
   if (!molecule_key (m, key))
     {
       /* a group outside the table: no caching */
-      if (!cw_analyze (b->data, m, &b->cond, &b->an, error))
+      if (!cw_analyze_equilibrium (b->data, m, &b->cond, &b->an, error))
         return NULL;
       g_string_truncate (b->scratch, 0);
       format_result (b, m, &b->an, b->scratch);
@@ -396,7 +396,7 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
       *len = e->len;
       return e->text;
     }
-  if (!cw_analyze (b->data, m, &b->cond, &b->an, error))
+  if (!cw_analyze_equilibrium (b->data, m, &b->cond, &b->an, error))
     return NULL;
   g_string_truncate (b->scratch, 0);
   format_result (b, m, &b->an, b->scratch);
