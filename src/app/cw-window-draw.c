@@ -98,10 +98,35 @@ draw_figure (CwWindow       *self,
              int             height)
 {
   guint    slot = figure_slot (fig);
+  int      scale = gtk_widget_get_scale_factor (GTK_WIDGET (area));
   gboolean dark;
   CwScene *scene = figure_scene (self, area, fig, width, height, &dark);
 
-  cw_render_figure_paint (cr, scene, dark, width, height);
+  /* Painted into an image of the area's pixels, kept with the scene it shows: GTK's Cairo
+   * renderer would otherwise replay the figure's drawing operations at every frame that
+   * shows the area, through an intermediate surface as large as the figure. */
+  if (!(self->figure_drawn_valid[slot] && self->figure_image[slot] != NULL && dark == self->figure_drawn_dark[slot] &&
+        width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot] &&
+        scale == self->figure_drawn_scale[slot] && cw_scene_equal (scene, self->figure_drawn[slot])))
+    {
+      g_clear_pointer (&self->figure_image[slot], cairo_surface_destroy);
+      if (scene != NULL && width > 0 && height > 0)
+        {
+          cairo_surface_t *image = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, width * scale, height * scale);
+          cairo_t         *icr;
+
+          cairo_surface_set_device_scale (image, scale, scale);
+          icr = cairo_create (image);
+          cw_render_figure_paint (icr, scene, dark, width, height);
+          cairo_destroy (icr);
+          self->figure_image[slot] = image;
+        }
+    }
+  if (self->figure_image[slot] != NULL)
+    {
+      cairo_set_source_surface (cr, self->figure_image[slot], 0, 0);
+      cairo_paint (cr);
+    }
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
   g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
   self->figure_drawn[slot] = scene;
@@ -109,6 +134,7 @@ draw_figure (CwWindow       *self,
   self->figure_drawn_dark[slot] = dark;
   self->figure_drawn_width[slot] = width;
   self->figure_drawn_height[slot] = height;
+  self->figure_drawn_scale[slot] = scale;
 }
 
 /* After a change: redraw the figures that now look different, and only those. A figure
@@ -127,7 +153,8 @@ cw_window_queue_figures (CwWindow *self)
       gboolean        same = FALSE;
 
       if (self->figure_drawn_valid[slot] && gtk_widget_get_mapped (GTK_WIDGET (area)) &&
-          width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot])
+          width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot] &&
+          gtk_widget_get_scale_factor (GTK_WIDGET (area)) == self->figure_drawn_scale[slot])
         {
           gboolean          dark;
           g_autoptr (CwScene) scene = figure_scene (self, area, figs[i], width, height, &dark);
@@ -146,6 +173,7 @@ cw_window_clear_figures (CwWindow *self)
   for (guint i = 0; i < G_N_ELEMENTS (self->figure_drawn); i++)
     {
       g_clear_pointer (&self->figure_drawn[i], cw_scene_free);
+      g_clear_pointer (&self->figure_image[i], cairo_surface_destroy);
       self->figure_drawn_valid[i] = FALSE;
     }
 }

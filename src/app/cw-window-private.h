@@ -70,11 +70,13 @@ struct _CwWindow
 
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
    * figure as it was does not redraw it */
-  CwScene *figure_drawn[3];
-  gboolean figure_drawn_valid[3];
-  gboolean figure_drawn_dark[3];
-  int      figure_drawn_width[3];
-  int      figure_drawn_height[3];
+  CwScene         *figure_drawn[3];
+  cairo_surface_t *figure_image[3]; /* figure_drawn, painted at the area's scale */
+  gboolean         figure_drawn_valid[3];
+  gboolean         figure_drawn_dark[3];
+  int              figure_drawn_width[3];
+  int              figure_drawn_height[3];
+  int              figure_drawn_scale[3];
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */

@@ -75,10 +75,20 @@ typedef struct
 static inline guint64
 cw_sm_frag_key (const char *text, int lo, int hi, int root_off)
 {
-  guint64 key = 0xcbf29ce484222325ull ^ (guint64) root_off;
-  for (int i = lo; i < hi; i++)
-    key = (key ^ (guchar) text[i]) * 0x100000001b3ull;
-  return key;
+  guint64 key = 0xcbf29ce484222325ull ^ (guint64) root_off ^ (guint64) (hi - lo) << 32, w;
+  int     i = lo;
+
+  /* eight bytes a step, the last few one by one */
+  for (; i + 8 <= hi; i += 8)
+    {
+      memcpy (&w, text + i, 8);
+      key = (key ^ w) * 0x9e3779b97f4a7c15ull;
+      key ^= key >> 29;
+    }
+  for (w = 0; i < hi; i++)
+    w = w << 8 | (guchar) text[i];
+  key = (key ^ w) * 0x9e3779b97f4a7c15ull;
+  return key ^ (key >> 32);
 }
 
 /* Sets of CW_SM_FRAG_WAYS entries, chosen by the high bits of the key times a large odd
