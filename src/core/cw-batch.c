@@ -185,8 +185,17 @@ fmt_sig (char *buf, double x)
 {
   int e, n;
 
+  static const double p10[] = { 1e-3, 1e-2, 1e-1, 1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6 };
+
   if (!isfinite (x) || x <= 0)
     return g_snprintf (buf, 32, "%g", x);
+  if (x >= 1e-3 && x < 1e6)
+    {
+      /* the decade by comparison (the usual case), not by a logarithm */
+      for (e = -3; x >= p10[e + 4]; e++)
+        ;
+      return fmt_fixed (buf, x, MAX (0, 3 - e));
+    }
   e = (int) floor (log10 (x));
   if (e >= -3 && e < 6)
     return fmt_fixed (buf, x, MAX (0, 3 - e));

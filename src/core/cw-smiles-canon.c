@@ -157,11 +157,12 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
           const guint64 *pk = packed[d != f];
           guint          occupancy;
           int            p;
-          if (d == 0)
-            sh = 2 * (st - 1), occupancy = ((fwd << sh) | (fwd >> (12 - sh))) & 0xfff;
-          else
-            /* backward from st (st, st-1, …) is bwd (1, 6, 5, …) turned by 6 - (st - 1) digits */
-            sh = (2 * (CW_RING_SIZE - (st - 1))) % 12, occupancy = ((bwd << sh) | (bwd >> (12 - sh))) & 0xfff;
+          /* forward from st: fwd turned by st - 1 digits; backward from st (st, st-1, …): bwd
+           * (1, 6, 5, …) turned by 6 - (st - 1) digits */
+          static const guint8 turn[2][CW_RING_SIZE + 1] = { { 0, 0, 2, 4, 6, 8, 10 }, { 0, 0, 10, 8, 6, 4, 2 } };
+          guint               seq = d ? bwd : fwd;
+          sh = turn[d][st];
+          occupancy = ((seq << sh) | (seq >> (12 - sh))) & 0xfff;
           if (have && occupancy > best_occupancy)
             continue;
           if (have && occupancy == best_occupancy)
