@@ -167,10 +167,13 @@ scan (Scan *sc, const char *s, int len)
           while (j < len)
             {
               char d = s[j];
+              if (G_LIKELY (char_class[(guchar) d] == CL_PLAIN))
+                {
+                  j++;
+                  continue;
+                }
               switch (char_class[(guchar) d])
                 {
-                case CL_PLAIN:
-                  break;
                 case CL_BRACKET:
                   j = bracket_end (s, len, j, &at);
                   if (j < 0)
