@@ -105,7 +105,12 @@ draw_figure (CwWindow       *self,
   /* Painted into an image of the area's pixels, kept with the scene it shows: GTK's Cairo
    * renderer would otherwise replay the figure's drawing operations at every frame that
    * shows the area, through an intermediate surface as large as the figure. */
-  if (!(self->figure_drawn_valid[slot] && self->figure_image[slot] != NULL && dark == self->figure_drawn_dark[slot] &&
+  if (g_getenv ("CW_NOIMG"))
+    {
+      cw_render_figure_paint (cr, scene, dark, width, height);
+      g_clear_pointer (&self->figure_image[slot], cairo_surface_destroy);
+    }
+  else if (!(self->figure_drawn_valid[slot] && self->figure_image[slot] != NULL && dark == self->figure_drawn_dark[slot] &&
         width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot] &&
         scale == self->figure_drawn_scale[slot] && cw_scene_equal (scene, self->figure_drawn[slot])))
     {

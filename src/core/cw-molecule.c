@@ -194,14 +194,8 @@ group_mass (const CwGroup *g)
  * groups the face of the one that ranks higher (first atom's atomic number, then the group's
  * size: an approximation of CIP priority). -1 when the carbon has no group or two alike. */
 static int
-single_face (const CwMolecule *mol, int position)
+single_face (const CwSubstituent *const found[2], int n)
 {
-  const CwSubstituent *found[2] = { NULL, NULL };
-  int n = 0;
-
-  for (int i = 0; i < mol->n_subs && n < 2; i++)
-    if (mol->subs[i].position == position)
-      found[n++] = &mol->subs[i];
   if (n == 1)
     return found[0]->face;
   if (n == 2 && found[0]->group != found[1]->group)
@@ -217,12 +211,20 @@ single_face (const CwMolecule *mol, int position)
 void
 cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
 {
-  int faces[CW_RING_SIZE + 1];
-  int n = 0, ref = -1;
+  const CwSubstituent *found[CW_RING_SIZE + 1][2];
+  int                  count[CW_RING_SIZE + 1] = { 0 }, faces[CW_RING_SIZE + 1];
+  int                  n = 0, ref = -1;
 
+  /* the groups of each carbon in one pass (a third one on a carbon is not looked at) */
+  for (int i = 0; i < mol->n_subs; i++)
+    {
+      int p = mol->subs[i].position;
+      if (p >= 1 && p <= CW_RING_SIZE && count[p] < 2)
+        found[p][count[p]++] = &mol->subs[i];
+    }
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
-      faces[p] = single_face (mol, p);
+      faces[p] = single_face (found[p], count[p]);
       if (faces[p] >= 0)
         {
           n++;
