@@ -12,7 +12,7 @@
 #endif
 
 void
-cw_cli_input_add_options (GOptionContext *context, CwCliInput *input, gboolean with_conditions)
+cw_cli_input_add_options (GOptionContext *context, CwCliInput *input, CwCliOptionSet set)
 {
   GOptionEntry source_entries[] = {
     { "smiles", 0, 0, G_OPTION_ARG_STRING, &input->smiles, N_("Read the molecule from SMILES"), "SMILES" },
@@ -26,14 +26,19 @@ cw_cli_input_add_options (GOptionContext *context, CwCliInput *input, gboolean w
       N_("Temperature with unit: 25C, -78 °C, 298.15K"), "T" },
     { "units", 'u', 0, G_OPTION_ARG_STRING, &input->units, N_("Energy unit: kcal or kJ"), "UNIT" },
     { "solvent", 's', 0, G_OPTION_ARG_STRING, &input->solvent, N_("Solvent class: aprotic or protic"), "CLASS" },
+    { NULL }
+  };
+  GOptionEntry format_entries[] = {
     { "json", 0, 0, G_OPTION_ARG_NONE, &input->json, N_("Write JSON"), NULL },
     { "csv", 0, 0, G_OPTION_ARG_NONE, &input->csv, N_("Write CSV"), NULL },
     { NULL }
   };
 
   g_option_context_add_main_entries (context, source_entries, GETTEXT_PACKAGE);
-  if (with_conditions)
+  if (set & CW_CLI_OPTIONS_CONDITIONS)
     g_option_context_add_main_entries (context, condition_entries, GETTEXT_PACKAGE);
+  if (set & CW_CLI_OPTIONS_FORMATS)
+    g_option_context_add_main_entries (context, format_entries, GETTEXT_PACKAGE);
 }
 
 void

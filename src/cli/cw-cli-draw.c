@@ -48,7 +48,7 @@ cw_cli_draw (int argc, char **argv)
   int             code = CW_EXIT_OK;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "draw", error->message);
   if (argc > 2)
@@ -101,7 +101,7 @@ cw_cli_report (int argc, char **argv)
   int code = CW_EXIT_OK;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "report", error->message);
   if (argc > 2)

@@ -153,7 +153,7 @@ cw_cli_geometry (int argc, char **argv)
           { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("Write the XYZ file here (default: standard output)"), "FILE.xyz" },
             { NULL } };
 
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS | CW_CLI_OPTIONS_FORMATS);
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "geometry", error->message);
@@ -388,7 +388,7 @@ cw_cli_couplings (int argc, char **argv)
                 { "width", 'w', 0, G_OPTION_ARG_STRING, &width, N_("Measured width (sum of vicinal couplings) of --proton, Hz"), "HZ" },
                   { NULL } };
 
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS | CW_CLI_OPTIONS_FORMATS);
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "couplings", error->message);

@@ -199,7 +199,7 @@ cw_cli_reactivity (int argc, char **argv)
   CwReactivity *r;
   int           code = CW_EXIT_OK;
 
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS | CW_CLI_OPTIONS_FORMATS);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "reactivity", error->message);
   if (argc > 2)

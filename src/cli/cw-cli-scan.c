@@ -48,7 +48,7 @@ cw_cli_scan (int argc, char **argv)
   long n;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
-  cw_cli_input_add_options (context, &input, FALSE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_SOURCE);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "scan", error->message);
   if (argc > 2)

@@ -119,7 +119,7 @@ cw_cli_isomers (int argc, char **argv)
   CwEnergyUnit      unit;
   int               code = CW_EXIT_OK;
 
-  cw_cli_input_add_options (context, &input, TRUE);
+  cw_cli_input_add_options (context, &input, CW_CLI_OPTIONS_CONDITIONS | CW_CLI_OPTIONS_FORMATS);
   if (!g_option_context_parse (context, &argc, &argv, &error))
     return cw_cli_usage_error (context, "isomers", error->message);
   if (argc > 2)

@@ -83,6 +83,35 @@ print_help (FILE *out)
                   "Exit codes: 0 ok, 1 analysis or file error, 2 usage error.\n"));
 }
 
+/* A text option whose value is not valid UTF-8 (in a UTF-8 locale GLib would only say "Invalid
+ * byte sequence in conversion input"): name the option. File names may be any bytes, so
+ * positional arguments and the file options are left to the command. */
+static gboolean
+check_text_options (const char *command, int argc, char **argv)
+{
+  static const char *const file_options[] = { "-o", "--output", "--data-dir", NULL };
+
+  for (int i = 1; i < argc; i++)
+    {
+      g_autofree char *name = NULL;
+      const char      *eq, *value = argv[i];
+      if (g_utf8_validate (argv[i], -1, NULL))
+        continue;
+      if (g_str_has_prefix (argv[i], "--") && (eq = strchr (argv[i], '=')) != NULL)
+        name = g_strndup (argv[i], eq - argv[i]), value = eq + 1;
+      else if (i > 1 && argv[i - 1][0] == '-' && argv[i - 1][1] != '\0' && !strchr (argv[i - 1], '='))
+        name = g_strdup (argv[i - 1]);
+      if (name == NULL || !g_utf8_validate (name, -1, NULL) || g_strv_contains (file_options, name))
+        continue;
+      {
+        g_autofree char *shown = g_utf8_make_valid (value, -1);
+        fprintf (stderr, _("chairwise-calc %s: the value of %s is not valid UTF-8 text: “%s”\n"), command, name, shown);
+        return FALSE;
+      }
+    }
+  return TRUE;
+}
+
 int
 main (int argc, char **argv)
 {
@@ -112,6 +141,8 @@ main (int argc, char **argv)
         int code;
 
         g_set_prgname (commands[i].name);
+        if (!check_text_options (commands[i].name, argc - 1, argv + 1))
+          return CW_EXIT_USAGE;
         code = commands[i].run (argc - 1, argv + 1);
         /* a full disk or a closed pipe must not pass for success */
         if (fflush (stdout) != 0 || ferror (stdout))

@@ -37,7 +37,15 @@ typedef struct
   gboolean csv;
 } CwCliInput;
 
-void        cw_cli_input_add_options (GOptionContext *context, CwCliInput *input, gboolean with_conditions);
+/* Which option groups a command takes besides --smiles/--ring/--data-dir. */
+typedef enum
+{
+  CW_CLI_OPTIONS_SOURCE = 0,
+  CW_CLI_OPTIONS_CONDITIONS = 1 << 0, /* --temperature, --units, --solvent */
+  CW_CLI_OPTIONS_FORMATS = 1 << 1     /* --json, --csv */
+} CwCliOptionSet;
+
+void        cw_cli_input_add_options (GOptionContext *context, CwCliInput *input, CwCliOptionSet set);
 void        cw_cli_input_clear (CwCliInput *input);
 G_DEFINE_AUTO_CLEANUP_CLEAR_FUNC (CwCliInput, cw_cli_input_clear)
 /* Loads the tables and the document (from the positional path, --smiles or --ring), applies

@@ -101,7 +101,11 @@ printf '%s"title":"caf\351","substituents":[]}' "$hdr" >"$tmp/latin1.json"
 bad "Latin-1 title" 1 "$tmp/latin1.json" "not valid UTF-8 text (at byte 55)" "$calc" analyze "$tmp/latin1.json"
 printf '\377\376{\000}\000' >"$tmp/utf16.json"
 bad "UTF-16 document" 1 "$tmp/utf16.json" "UTF-8" "$calc" analyze "$tmp/utf16.json"
-bad "Latin-1 in --ring" 2 "byte sequence" "" "$calc" analyze --ring "$(printf '1u=caf\351')"
+bad "Latin-1 in --ring" 2 "the value of --ring is not valid UTF-8" "" "$calc" analyze --ring "$(printf '1u=caf\351')"
+bad "Latin-1 in --smiles=" 2 "the value of --smiles is not valid UTF-8" "" "$calc" isomers --smiles="$(printf 'CC1CCC(C\351)CC1')"
+# a drawing goes to its file: output formats of the text commands are not offered
+bad "--json on draw" 2 "--json" "draw --help" "$calc" draw --ring 1u=methyl --figure chairs --json -o "$tmp/x.png"
+bad "--csv on report" 2 "--csv" "report --help" "$calc" report --ring 1u=methyl --csv -o "$tmp/x.pdf"
 
 # --- files that are not documents, or cannot be read
 bad "a folder" 1 "$tmp" "directory" "$calc" analyze "$tmp"
