@@ -37,6 +37,8 @@ typedef struct
   gint16 slots[CW_PARAM_SLOTS]; /* param index + 1, 0 for empty */
   gboolean any_estimate;
   int estimate_a, estimate_b;
+  guint64 estimated_pairs[(CW_MAX_SUBS * CW_MAX_SUBS + 63) / 64]; /* bit a * CW_MAX_SUBS + b, a < b */
+  int n_estimated_pairs;
 } CwEngine;
 
 enum { PARAM_A, PARAM_PAIR, PARAM_FALLBACK_SYN, PARAM_FALLBACK_GAUCHE };
@@ -152,12 +154,20 @@ fallback_value (const CwEngine *e, int a, int b, double scale, double *sigma)
 static void
 note_estimate (CwEngine *e, int a, int b)
 {
+  int bit = MIN (a, b) * CW_MAX_SUBS + MAX (a, b);
+
   if (!e->any_estimate)
     {
       e->estimate_a = a;
       e->estimate_b = b;
     }
   e->any_estimate = TRUE;
+  /* count each pair once, whichever chairs it is estimated in */
+  if (!(e->estimated_pairs[bit / 64] & (G_GUINT64_CONSTANT (1) << (bit % 64))))
+    {
+      e->estimated_pairs[bit / 64] |= G_GUINT64_CONSTANT (1) << (bit % 64);
+      e->n_estimated_pairs++;
+    }
 }
 
 static void
@@ -396,7 +406,7 @@ build_flags (CwEngine *e, CwFlagCode symmetry)
     for (int j = i + 1; j < mol->n_subs; j++)
       pair_flags (e, i, j);
   if (e->any_estimate)
-    add_flag (an, CW_FLAG_ESTIMATED_TERM, e->estimate_a, e->estimate_b, 0);
+    add_flag (an, CW_FLAG_ESTIMATED_TERM, e->estimate_a, e->estimate_b, e->n_estimated_pairs);
   for (int i = 0; i < mol->n_subs; i++)
     {
       const CwGroup *g = mol->subs[i].group;
@@ -521,6 +531,8 @@ analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, gb
   e.n_params = 0;
   memset (e.slots, 0, sizeof e.slots);
   e.any_estimate = FALSE;
+  memset (e.estimated_pairs, 0, sizeof e.estimated_pairs);
+  e.n_estimated_pairs = 0;
   out->temperature = cond->temperature;
   out->solvent = cond->solvent;
   out->n_flags = 0;
@@ -614,8 +626,18 @@ cw_flag_dup_message (const CwFlag *flag, const CwMolecule *mol, CwEnergyUnit uni
                                 "acceptor: an intramolecular hydrogen bond may stabilise the diaxial "
                                 "chair, most of all in nonpolar solvents."), a, b);
     case CW_FLAG_ESTIMATED_TERM:
-      return g_strdup_printf (_("No published pair term for %s/%s (and maybe others): estimated "
-                                "by the documented fall-back rule, with a wide uncertainty."), a, b);
+      if (flag->value <= 1)
+        return g_strdup_printf (_("No published pair term for %s/%s: estimated by the documented "
+                                  "fall-back rule, with a wide uncertainty."), a, b);
+      {
+        int others = (int) flag->value - 1;
+        return g_strdup_printf (ngettext ("No published pair term for %s/%s and %d other pair: estimated "
+                                          "by the documented fall-back rule, with a wide uncertainty.",
+                                          "No published pair term for %s/%s and %d other pairs: estimated "
+                                          "by the documented fall-back rule, with a wide uncertainty.",
+                                          others),
+                                a, b, others);
+      }
     case CW_FLAG_CONSTANT_A:
       return g_strdup_printf (_("Some A-values, e.g. that of %s, have no published ΔH°/ΔS° and are "
                                 "held at their ~298 K value at every temperature."), a);

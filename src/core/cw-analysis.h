@@ -71,7 +71,7 @@ typedef struct
   CwFlagCode code;
   int sub_a;    /* -1 when none */
   int sub_b;
-  double value; /* e.g. the twist-boat estimate, kcal/mol */
+  double value; /* e.g. the twist-boat estimate (kcal/mol), the number of estimated pairs */
 } CwFlag;
 
 typedef struct

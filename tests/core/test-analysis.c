@@ -154,6 +154,20 @@ test_additivity_flags (void)
   g_assert_true (cw_analysis_has_flag (&an, CW_FLAG_GEMINAL_NONADDITIVE));
   test_analyze (data, "1u=chloro 3u=bromo", 298.15, &an);
   g_assert_true (cw_analysis_has_flag (&an, CW_FLAG_ESTIMATED_TERM));
+  /* the message counts the estimated pairs: data/interactions.json has no term for at least two
+   * of this molecule's pairs (nitro/azido among them), so the fall-back rule is used twice */
+  {
+    g_autoptr (CwMolecule) mol = test_ring (data, "1u=nitro 2d=azido 3d=cyano");
+    CwConditions cond = { 298.15, CW_SOLVENT_APROTIC };
+    g_assert_true (cw_analyze (data, mol, &cond, &an, NULL));
+    for (int k = 0; k < an.n_flags; k++)
+      if (an.flags[k].code == CW_FLAG_ESTIMATED_TERM)
+        {
+          g_autofree char *msg = cw_flag_dup_message (&an.flags[k], mol, CW_UNIT_KCAL);
+          g_assert_cmpfloat (an.flags[k].value, >=, 2);
+          g_assert_nonnull (strstr (msg, "other pair"));
+        }
+  }
   /* methylcyclohexane raises none of these */
   test_analyze (data, "1u=methyl", 298.15, &an);
   g_assert_false (cw_analysis_has_flag (&an, CW_FLAG_POLAR_VICINAL) ||
