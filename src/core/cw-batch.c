@@ -97,66 +97,7 @@ static const char digit_pairs[201] = "000102030405060708091011121314151617181920
                                      "40414243444546474849505152535455565758596061626364656667686970717273747576777879"
                                      "8081828384858687888990919293949596979899";
 
-/* Fixed-point with `decimals` digits (0..6), halves rounded away from zero; printf for huge or
- * odd values. Inlined, so that each call's constant `decimals` turns the divisions into
- * multiplications. */
-static inline G_ALWAYS_INLINE int
-fmt_fixed (char *buf, double x, int decimals)
-{
-  static const double  scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
-  static const guint64 iscale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
-  guint64              v, ip, fp;
-  int                  n = 0, t;
-  char                 tmp[24];
-
-  if (!isfinite (x) || fabs (x) >= 1e12)
-    return g_snprintf (buf, 32, "%.*g", decimals + 3, x);
-  v = (guint64) ((x < 0 ? -x : x) * scale[decimals] + 0.5);
-  if (x < 0 && v != 0)
-    buf[n++] = '-';
-  ip = v / iscale[decimals];
-  fp = v - ip * iscale[decimals];
-  /* integer part */
-  if (ip < 10)
-    buf[n++] = '0' + ip;
-  else
-    {
-      t = sizeof tmp;
-      while (ip >= 100)
-        {
-          guint64 q = ip / 100;
-          t -= 2;
-          memcpy (tmp + t, digit_pairs + 2 * (ip - q * 100), 2);
-          ip = q;
-        }
-      if (ip >= 10)
-        t -= 2, memcpy (tmp + t, digit_pairs + 2 * ip, 2);
-      else
-        tmp[--t] = '0' + ip;
-      memcpy (buf + n, tmp + t, sizeof tmp - t);
-      n += sizeof tmp - t;
-    }
-  if (decimals)
-    {
-      int d = decimals;
-      buf[n++] = '.';
-      /* fraction: right to left, two digits a step */
-      while (d >= 2)
-        {
-          guint64 q = fp / 100;
-          d -= 2;
-          memcpy (buf + n + d, digit_pairs + 2 * (fp - q * 100), 2);
-          fp = q;
-        }
-      if (d)
-        buf[n] = '0' + fp;
-      n += decimals;
-    }
-  buf[n] = '\0';
-  return n;
-}
-
-/* A line number. */
+/* An unsigned integer (a line number, the integer part of a fixed-point number). */
 static inline int
 fmt_uint (char *buf, guint64 v)
 {
@@ -177,6 +118,49 @@ fmt_uint (char *buf, guint64 v)
   memcpy (buf, tmp + t, sizeof tmp - t);
   buf[sizeof tmp - t] = '\0';
   return sizeof tmp - t;
+}
+
+/* Fixed-point with `decimals` digits (0..6), halves rounded away from zero; printf for huge or
+ * odd values. Inlined, so that each call's constant `decimals` turns the divisions into
+ * multiplications. */
+static inline G_ALWAYS_INLINE int
+fmt_fixed (char *buf, double x, int decimals)
+{
+  static const double  scale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
+  static const guint64 iscale[] = { 1, 10, 100, 1000, 10000, 100000, 1000000 };
+  guint64              v, ip, fp;
+  int                  n = 0;
+
+  if (!isfinite (x) || fabs (x) >= 1e12)
+    return g_snprintf (buf, 32, "%.*g", decimals + 3, x);
+  v = (guint64) ((x < 0 ? -x : x) * scale[decimals] + 0.5);
+  if (x < 0 && v != 0)
+    buf[n++] = '-';
+  ip = v / iscale[decimals];
+  fp = v - ip * iscale[decimals];
+  /* integer part */
+  if (ip < 10)
+    buf[n++] = '0' + ip;
+  else
+    n += fmt_uint (buf + n, ip);
+  if (decimals)
+    {
+      int d = decimals;
+      buf[n++] = '.';
+      /* fraction: right to left, two digits a step */
+      while (d >= 2)
+        {
+          guint64 q = fp / 100;
+          d -= 2;
+          memcpy (buf + n + d, digit_pairs + 2 * (fp - q * 100), 2);
+          fp = q;
+        }
+      if (d)
+        buf[n] = '0' + fp;
+      n += decimals;
+    }
+  buf[n] = '\0';
+  return n;
 }
 
 /* Four significant digits: fixed between 1e-3 and 1e6, else d.ddde±N. */
