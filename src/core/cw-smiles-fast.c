@@ -391,27 +391,29 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
 
   if (len > G_MAXUINT16 || !scan (&sc, text, len))
     return 0;
-  /* the ring: the only ring bond joining two top-level atoms five apart */
+  /* the ring: a ring bond joining two top-level atoms five apart, all six plain carbons with no
+   * bond symbol or other ring bond among them; exactly one such. Another ring of the text then
+   * lies inside a group, which the cache check below vets (a plain cyclohexyl, or aromatic). */
   for (int k = 0; k < sc.n_digit; k++)
     {
-      int p = sc.dg_pair[k];
-      if (p > k && sc.dg_seg[k] >= 0 && sc.dg_seg[p] == sc.dg_seg[k] + 5)
+      int      p = sc.dg_pair[k], start = sc.dg_seg[k];
+      gboolean ok;
+      if (p < k || start < 0 || sc.dg_seg[p] != start + 5)
+        continue;
+      ok = !sc.dg_bond[k] && !sc.dg_bond[p];
+      for (int j = 0; j < 6 && ok; j++)
         {
-          if (first >= 0)
-            return 0;
-          first = sc.dg_seg[k];
-          if (sc.dg_bond[k] || sc.dg_bond[p])
-            return 0;
+          const ChainAtom *a = &sc.chain[start + j];
+          ok = a->kind != RING_NOT_OK && a->n_digit == (j == 0 || j == 5) && !(a->bond_before && (j > 0 || start > 0));
         }
+      if (!ok)
+        continue;
+      if (first >= 0)
+        return 0;
+      first = start;
     }
   if (first < 0)
     return 0;
-  for (int k = 0; k < 6; k++)
-    {
-      const ChainAtom *a = &sc.chain[first + k];
-      if (a->kind == RING_NOT_OK || a->n_digit != (k == 0 || k == 5) || (a->bond_before && (k > 0 || first > 0)))
-        return 0;
-    }
   /* every other ring bond stays inside one substituent */
   for (int k = 0; k < sc.n_digit; k++)
     {
