@@ -285,7 +285,8 @@ cw_application_startup (GApplication *app)
   gtk_css_provider_load_from_resource (css, "/org/chairwise/Chairwise/style.css");
   gtk_style_context_add_provider_for_display (gdk_display_get_default (), GTK_STYLE_PROVIDER (css),
                                               GTK_STYLE_PROVIDER_PRIORITY_APPLICATION);
-  gtk_window_set_default_icon_name (CW_APP_ID);
+  /* The default window icon is set by the first main window once it has drawn its first
+   * frame (see cw-window.c). */
   follow_color_scheme (CW_APPLICATION (app));
 }
 

@@ -1,6 +1,7 @@
 #include "config.h"
 
 #include <glib/gi18n.h>
+#include <string.h>
 
 #include "cw-window-private.h"
 
@@ -67,26 +68,33 @@ figure_area (CwWindow *self,
 static guint
 figure_slot (CwFigure fig)
 {
-  return fig == CW_FIGURE_CHAIRS ? 0 : fig == CW_FIGURE_PROFILE ? 1 : 2;
+  switch (fig)
+    {
+    case CW_FIGURE_CHAIRS:
+      return 0;
+    case CW_FIGURE_PROFILE:
+      return 1;
+    case CW_FIGURE_SCAN:
+    case CW_FIGURE_STRUCTURE:
+    default:
+      return 2;
+    }
 }
 
 /* The figure as it would be drawn now into the area's box; NULL when nothing is drawn. */
 static CwScene *
-figure_scene (CwWindow       *self,
-              GtkDrawingArea *area,
-              CwFigure        fig,
-              int             width,
-              int             height,
-              gboolean       *dark)
+figure_scene (CwWindow        *self,
+              GtkDrawingArea  *area,
+              CwFigure         fig,
+              int              width,
+              int              height,
+              CwRenderOptions *opt)
 {
-  CwRenderOptions opt;
-
-  cw_window_render_options (self, GTK_WIDGET (area), &opt);
-  *dark = opt.dark;
+  cw_window_render_options (self, GTK_WIDGET (area), opt);
   if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
     return NULL;
   return cw_render_figure_scene (fig, self->data, cw_document_peek_molecule (self->doc),
-                                 self->an_valid ? &self->an : NULL, &opt, width, height);
+                                 self->an_valid ? &self->an : NULL, opt, width, height);
 }
 
 static void
@@ -97,49 +105,46 @@ draw_figure (CwWindow       *self,
              int             width,
              int             height)
 {
-  guint    slot = figure_slot (fig);
-  int      scale = gtk_widget_get_scale_factor (GTK_WIDGET (area));
-  gboolean dark;
-  CwScene *scene = figure_scene (self, area, fig, width, height, &dark);
+  guint           slot = figure_slot (fig);
+  CwRenderOptions opt;
+  CwScene        *scene;
 
-  /* Painted into an image of the area's pixels, kept with the scene it shows: GTK's Cairo
-   * renderer would otherwise replay the figure's drawing operations at every frame that
-   * shows the area, through an intermediate surface as large as the figure. */
-  if (g_getenv ("CW_NOIMG"))
+  cw_window_render_options (self, GTK_WIDGET (area), &opt);
+  /* The scene laid out when the redraw was queued, if nothing has changed since. */
+  if (self->figure_pending[slot] != NULL && self->figure_pending_stamp[slot] == self->figure_stamp &&
+      self->figure_pending_width[slot] == width && self->figure_pending_height[slot] == height &&
+      memcmp (&self->figure_pending_opt[slot], &opt, sizeof opt) == 0)
+    scene = g_steal_pointer (&self->figure_pending[slot]);
+  else
     {
-      cw_render_figure_paint (cr, scene, dark, width, height);
-      g_clear_pointer (&self->figure_image[slot], cairo_surface_destroy);
+      g_clear_pointer (&self->figure_pending[slot], cw_scene_free);
+      scene = figure_scene (self, area, fig, width, height, &opt);
     }
-  else if (!(self->figure_drawn_valid[slot] && self->figure_image[slot] != NULL && dark == self->figure_drawn_dark[slot] &&
-        width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot] &&
-        scale == self->figure_drawn_scale[slot] && cw_scene_equal (scene, self->figure_drawn[slot])))
-    {
-      g_clear_pointer (&self->figure_image[slot], cairo_surface_destroy);
-      if (scene != NULL && width > 0 && height > 0)
-        {
-          cairo_surface_t *image = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, width * scale, height * scale);
-          cairo_t         *icr;
-
-          cairo_surface_set_device_scale (image, scale, scale);
-          icr = cairo_create (image);
-          cw_render_figure_paint (icr, scene, dark, width, height);
-          cairo_destroy (icr);
-          self->figure_image[slot] = image;
-        }
-    }
-  if (self->figure_image[slot] != NULL)
-    {
-      cairo_set_source_surface (cr, self->figure_image[slot], 0, 0);
-      cairo_paint (cr);
-    }
+  cw_render_figure_paint (cr, scene, opt.dark, width, height);
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
   g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
   self->figure_drawn[slot] = scene;
   self->figure_drawn_valid[slot] = TRUE;
-  self->figure_drawn_dark[slot] = dark;
+  self->figure_drawn_dark[slot] = opt.dark;
   self->figure_drawn_width[slot] = width;
   self->figure_drawn_height[slot] = height;
-  self->figure_drawn_scale[slot] = scale;
+}
+
+/* Cairo places every point on a grid of 1/256 device pixel: a figure whose every point
+ * moved by less than that (a temperature step shifts the energy levels by a few thousandths
+ * of a point) is drawn as it already is. Returns that step in the scene's units. */
+static double
+figure_tolerance (GtkDrawingArea *area,
+                  const CwScene  *scene,
+                  int             width,
+                  int             height)
+{
+  double s;
+
+  if (scene == NULL || scene->width <= 0 || scene->height <= 0)
+    return 0.0;
+  s = MIN (width / scene->width, height / scene->height) * gtk_widget_get_scale_factor (GTK_WIDGET (area));
+  return s > 0 ? 1.0 / (256.0 * s) : 0.0;
 }
 
 /* After a change: redraw the figures that now look different, and only those. A figure
@@ -155,19 +160,29 @@ cw_window_queue_figures (CwWindow *self)
       guint           slot = figure_slot (figs[i]);
       int             width = gtk_widget_get_width (GTK_WIDGET (area));
       int             height = gtk_widget_get_height (GTK_WIDGET (area));
-      gboolean        same = FALSE;
+      CwRenderOptions opt;
+      CwScene        *scene;
 
-      if (self->figure_drawn_valid[slot] && gtk_widget_get_mapped (GTK_WIDGET (area)) &&
-          width == self->figure_drawn_width[slot] && height == self->figure_drawn_height[slot] &&
-          gtk_widget_get_scale_factor (GTK_WIDGET (area)) == self->figure_drawn_scale[slot])
+      g_clear_pointer (&self->figure_pending[slot], cw_scene_free);
+      if (!self->figure_drawn_valid[slot] || !gtk_widget_get_mapped (GTK_WIDGET (area)) ||
+          width != self->figure_drawn_width[slot] || height != self->figure_drawn_height[slot])
         {
-          gboolean          dark;
-          g_autoptr (CwScene) scene = figure_scene (self, area, figs[i], width, height, &dark);
-
-          same = dark == self->figure_drawn_dark[slot] && cw_scene_equal (scene, self->figure_drawn[slot]);
+          gtk_widget_queue_draw (GTK_WIDGET (area));
+          continue;
         }
-      if (!same)
-        gtk_widget_queue_draw (GTK_WIDGET (area));
+      scene = figure_scene (self, area, figs[i], width, height, &opt);
+      if (opt.dark == self->figure_drawn_dark[slot] &&
+          cw_scene_equal_within (scene, self->figure_drawn[slot], figure_tolerance (area, scene, width, height)))
+        {
+          cw_scene_free (scene);
+          continue;
+        }
+      self->figure_pending[slot] = scene;
+      self->figure_pending_opt[slot] = opt;
+      self->figure_pending_width[slot] = width;
+      self->figure_pending_height[slot] = height;
+      self->figure_pending_stamp[slot] = self->figure_stamp;
+      gtk_widget_queue_draw (GTK_WIDGET (area));
     }
 }
 
@@ -178,7 +193,7 @@ cw_window_clear_figures (CwWindow *self)
   for (guint i = 0; i < G_N_ELEMENTS (self->figure_drawn); i++)
     {
       g_clear_pointer (&self->figure_drawn[i], cw_scene_free);
-      g_clear_pointer (&self->figure_image[i], cairo_surface_destroy);
+      g_clear_pointer (&self->figure_pending[i], cw_scene_free);
       self->figure_drawn_valid[i] = FALSE;
     }
 }

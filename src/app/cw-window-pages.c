@@ -306,7 +306,9 @@ cw_window_update_pages (CwWindow *self)
   g_autoptr (GError) error = NULL;
   const CwGeometryData *gd;
 
-  /* Only the page on screen is computed; the others when they are shown. */
+  /* Only the page on screen is computed; the others when they are shown. The reaction
+   * geometry may be drawn on the chairs: a figure laid out before is out of date. */
+  self->figure_stamp++;
   self->reactivity_valid = FALSE;
   if (!self->an_valid)
     return;

@@ -70,13 +70,20 @@ struct _CwWindow
 
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
    * figure as it was does not redraw it */
-  CwScene         *figure_drawn[3];
-  cairo_surface_t *figure_image[3]; /* figure_drawn, painted at the area's scale */
-  gboolean         figure_drawn_valid[3];
-  gboolean         figure_drawn_dark[3];
-  int              figure_drawn_width[3];
-  int              figure_drawn_height[3];
-  int              figure_drawn_scale[3];
+  CwScene *figure_drawn[3];
+  gboolean figure_drawn_valid[3];
+  gboolean figure_drawn_dark[3];
+  int      figure_drawn_width[3];
+  int      figure_drawn_height[3];
+  /* a changed figure as laid out when its redraw was queued, drawn as it is unless
+   * something has changed since (figure_stamp counts changes of the document, analysis
+   * and pages) */
+  CwScene        *figure_pending[3];
+  CwRenderOptions figure_pending_opt[3];
+  int             figure_pending_width[3];
+  int             figure_pending_height[3];
+  guint           figure_pending_stamp[3];
+  guint           figure_stamp;
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */
@@ -88,6 +95,7 @@ struct _CwWindow
   guint         saved_serial;
   guint         next_serial;
   guint         autosave_id;
+  gulong        first_frame_id; /* after-paint handler that sets the window icon */
   guint         n_custom_shown; /* custom groups in groups_store */
   gboolean      updating_temperature;
   gboolean      close_confirmed;

@@ -118,6 +118,7 @@ cw_window_refresh (CwWindow *self)
   guint        n_custom = mol->custom_groups ? mol->custom_groups->len : 0;
 
   self->refreshed = TRUE;
+  self->figure_stamp++;
   cw_document_get_conditions (self->doc, &cond);
   g_clear_pointer (&self->analysis_error, g_free);
   self->an_valid = cw_analyze (self->data, mol, &cond, &self->an, &error);
@@ -336,6 +337,25 @@ cw_window_close_request_vfunc (GtkWindow *window)
   return GTK_WINDOW_CLASS (cw_window_parent_class)->close_request (window);
 }
 
+static gboolean
+set_icon_idle_cb (gpointer user_data)
+{
+  gtk_window_set_default_icon_name (CW_APP_ID);
+  gtk_window_set_icon_name (GTK_WINDOW (user_data), CW_APP_ID);
+  return G_SOURCE_REMOVE;
+}
+
+static void
+first_frame_cb (GdkFrameClock *clock,
+                CwWindow      *self)
+{
+  g_clear_signal_handler (&self->first_frame_id, clock);
+  /* After other low-priority work queued by this frame (a --screenshot run takes its
+   * picture then): the window controls rebuild themselves for the icon, which needs a
+   * new layout. */
+  g_idle_add_full (G_PRIORITY_LOW + 10, set_icon_idle_cb, g_object_ref (self), g_object_unref);
+}
+
 static void
 cw_window_realize (GtkWidget *widget)
 {
@@ -344,6 +364,23 @@ cw_window_realize (GtkWidget *widget)
   if (!self->refreshed)
     cw_window_refresh (self);
   GTK_WIDGET_CLASS (cw_window_parent_class)->realize (widget);
+  /* The window's icon is set once its first frame is on screen: on X11 GTK renders the
+   * icon at several sizes for the window manager when it is set, and the SVG renderer it
+   * loads for that (with its XML and Unicode libraries) is about a twentieth of the time
+   * to the first frame, and 8 MB. */
+  if (gtk_window_get_icon_name (GTK_WINDOW (self)) == NULL && self->first_frame_id == 0)
+    self->first_frame_id = g_signal_connect (gtk_widget_get_frame_clock (widget), "after-paint",
+                                             G_CALLBACK (first_frame_cb), self);
+}
+
+static void
+cw_window_unrealize (GtkWidget *widget)
+{
+  CwWindow *self = CW_WINDOW (widget);
+
+  if (self->first_frame_id != 0)
+    g_clear_signal_handler (&self->first_frame_id, gtk_widget_get_frame_clock (widget));
+  GTK_WIDGET_CLASS (cw_window_parent_class)->unrealize (widget);
 }
 
 static void
@@ -393,6 +430,7 @@ cw_window_class_init (CwWindowClass *klass)
   object_class->finalize = cw_window_finalize;
   window_class->close_request = cw_window_close_request_vfunc;
   widget_class->realize = cw_window_realize;
+  widget_class->unrealize = cw_window_unrealize;
 
   g_type_ensure (CW_TYPE_RING_CANVAS);
   g_type_ensure (CW_TYPE_GROUP_CHOOSER);

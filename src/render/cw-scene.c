@@ -40,39 +40,52 @@ cw_scene_free (CwScene *scene)
 }
 
 static gboolean
-prim_equal (const CwPrim *a, const CwPrim *b)
+near (double a, double b, double tolerance)
+{
+  return a == b || fabs (a - b) < tolerance;
+}
+
+static gboolean
+prim_equal (const CwPrim *a, const CwPrim *b, double tol)
 {
   return a->kind == b->kind && a->role == b->role && a->ink == b->ink && a->chair == b->chair &&
-         a->sub == b->sub && a->position == b->position && a->axial == b->axial && a->x0 == b->x0 &&
-         a->y0 == b->y0 && a->x1 == b->x1 && a->y1 == b->y1 && a->line_width == b->line_width &&
-         a->wide == b->wide && a->dash == b->dash && a->fill == b->fill && a->halo == b->halo &&
-         a->halo_ink == b->halo_ink && a->marker == b->marker && a->first_point == b->first_point &&
-         a->n_points == b->n_points && g_strcmp0 (a->markup, b->markup) == 0 && a->size == b->size &&
-         a->bold == b->bold && a->wrap == b->wrap && a->box.x == b->box.x && a->box.y == b->box.y &&
-         a->box.w == b->box.w && a->box.h == b->box.h;
+         a->sub == b->sub && a->position == b->position && a->axial == b->axial && near (a->x0, b->x0, tol) &&
+         near (a->y0, b->y0, tol) && near (a->x1, b->x1, tol) && near (a->y1, b->y1, tol) &&
+         a->line_width == b->line_width && near (a->wide, b->wide, tol) && a->dash == b->dash &&
+         a->fill == b->fill && a->halo == b->halo && a->halo_ink == b->halo_ink && a->marker == b->marker &&
+         a->first_point == b->first_point && a->n_points == b->n_points && g_strcmp0 (a->markup, b->markup) == 0 &&
+         a->size == b->size && a->bold == b->bold && a->wrap == b->wrap && near (a->box.x, b->box.x, tol) &&
+         near (a->box.y, b->box.y, tol) && near (a->box.w, b->box.w, tol) && near (a->box.h, b->box.h, tol);
 }
 
 gboolean
-cw_scene_equal (const CwScene *a, const CwScene *b)
+cw_scene_equal_within (const CwScene *a, const CwScene *b, double tolerance)
 {
   if (a == b)
     return TRUE;
   if (a == NULL || b == NULL)
     return FALSE;
-  if (a->width != b->width || a->height != b->height || a->origin_x != b->origin_x ||
-      a->origin_y != b->origin_y || a->prims->len != b->prims->len || a->points->len != b->points->len)
+  if (a->width != b->width || a->height != b->height || !near (a->origin_x, b->origin_x, tolerance) ||
+      !near (a->origin_y, b->origin_y, tolerance) || a->prims->len != b->prims->len ||
+      a->points->len != b->points->len)
     return FALSE;
   for (guint i = 0; i < a->points->len; i++)
     {
       const CwPoint *p = &g_array_index (a->points, CwPoint, i), *q = &g_array_index (b->points, CwPoint, i);
 
-      if (p->x != q->x || p->y != q->y)
+      if (!near (p->x, q->x, tolerance) || !near (p->y, q->y, tolerance))
         return FALSE;
     }
   for (guint i = 0; i < a->prims->len; i++)
-    if (!prim_equal (&g_array_index (a->prims, CwPrim, i), &g_array_index (b->prims, CwPrim, i)))
+    if (!prim_equal (&g_array_index (a->prims, CwPrim, i), &g_array_index (b->prims, CwPrim, i), tolerance))
       return FALSE;
   return TRUE;
+}
+
+gboolean
+cw_scene_equal (const CwScene *a, const CwScene *b)
+{
+  return cw_scene_equal_within (a, b, 0.0);
 }
 
 CwPrim *

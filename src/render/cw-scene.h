@@ -127,6 +127,9 @@ CwPrim *cw_scene_paragraph (CwScene *scene, CwRole role, CwInk ink, const char *
 CwPrim *cw_scene_get (const CwScene *scene, guint i);
 /* TRUE when both scenes would paint the same (every prim, point and text alike). */
 gboolean cw_scene_equal (const CwScene *a, const CwScene *b);
+/* The same, with positions and sizes allowed to differ by less than `tolerance` (scene units);
+ * texts, styles and the scene's own size still compare exactly. */
+gboolean cw_scene_equal_within (const CwScene *a, const CwScene *b, double tolerance);
 /* Copies every prim of src into scene, moved by (dx, dy). */
 void  cw_scene_append (CwScene *scene, const CwScene *src, double dx, double dy);
 guint cw_scene_get_n (const CwScene *scene);

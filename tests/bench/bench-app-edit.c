@@ -163,11 +163,28 @@ run_series (CwWindow   *win,
   return TRUE;
 }
 
+/* The temperature slider inside the popover. */
+static GtkWidget *
+find_scale (GtkWidget *widget)
+{
+  if (GTK_IS_SCALE (widget))
+    return widget;
+  for (GtkWidget *child = gtk_widget_get_first_child (widget); child != NULL; child = gtk_widget_get_next_sibling (child))
+    {
+      GtkWidget *found = find_scale (child);
+
+      if (found != NULL)
+        return found;
+    }
+  return NULL;
+}
+
 int
 main (int argc, char *argv[])
 {
   GdkFrameClock *clock;
   CwWindow      *win;
+  GtkWidget     *scale;
   guint          tick;
   gboolean       ok;
 
@@ -224,6 +241,13 @@ main (int argc, char *argv[])
     if (!gtk_widget_get_mapped (popover))
       {
         printf ("the temperature popover did not open\n");
+        return 1;
+      }
+    /* A drag starts with a click on the slider, which takes the focus. */
+    scale = find_scale (popover);
+    if (scale == NULL || !gtk_widget_grab_focus (scale))
+      {
+        printf ("the temperature slider cannot take the focus\n");
         return 1;
       }
   }
