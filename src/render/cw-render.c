@@ -163,6 +163,10 @@ cw_render_figure_scene (CwFigure fig, const CwData *data, const CwMolecule *mol,
    * proportions and the extra room goes to the figure. */
   cw_render_figure_size (fig, &w0, &h0);
   s = MIN (width / w0, height / h0);
+  /* a wide, low box (the window's lower area): lay the plot out lower rather than shrinking
+   * its text below three quarters of the design size */
+  if (fig != CW_FIGURE_CHAIRS && fig != CW_FIGURE_STRUCTURE && s < 0.75 && width / w0 >= 0.75)
+    s = 0.75;
   return cw_render_build_figure (fig, data, mol, an, opt, width / s, height / s);
 }
 
