@@ -82,10 +82,20 @@ is_bond_char (char c)
   return c == '-' || c == '=' || c == '#' || c == '$' || c == ':' || c == '/' || c == '\\';
 }
 
+/* Characters that begin an atom: '[', '*' and letters. */
+#define LETTERS(base) \
+  [base + 0] = 1, [base + 1] = 1, [base + 2] = 1, [base + 3] = 1, [base + 4] = 1, [base + 5] = 1, \
+  [base + 6] = 1, [base + 7] = 1, [base + 8] = 1, [base + 9] = 1, [base + 10] = 1, [base + 11] = 1, \
+  [base + 12] = 1, [base + 13] = 1, [base + 14] = 1, [base + 15] = 1, [base + 16] = 1, [base + 17] = 1, \
+  [base + 18] = 1, [base + 19] = 1, [base + 20] = 1, [base + 21] = 1, [base + 22] = 1, [base + 23] = 1, \
+  [base + 24] = 1, [base + 25] = 1
+static const guint8 atom_start[256] = { ['['] = 1, ['*'] = 1, LETTERS ('A'), LETTERS ('a') };
+#undef LETTERS
+
 static inline gboolean
 is_atom_start (char c)
 {
-  return c == '[' || c == '*' || (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z');
+  return atom_start[(guchar) c];
 }
 
 /* The ']' closing the bracket atom opened at i, or -1; *at tells whether it holds '@'. */
@@ -404,7 +414,7 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
       for (int j = 0; j < 6 && ok; j++)
         {
           const ChainAtom *a = &sc.chain[start + j];
-          ok = a->kind != RING_NOT_OK && a->n_digit == (j == 0 || j == 5) && !(a->bond_before && (j > 0 || start > 0));
+          ok = (a->kind != RING_NOT_OK) & (a->n_digit == (j == 0 || j == 5)) & !(a->bond_before & ((j > 0) | (start > 0)));
         }
       if (!ok)
         continue;
@@ -451,7 +461,7 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
       int              n_here;
       gboolean         clockwise;
 
-      if (degree > 4 || (a->kind == RING_BRACKET && degree + a->hcount != 4))
+      if ((degree > 4) | ((a->kind == RING_BRACKET) & (degree + a->hcount != 4)))
         return 0;
       r->ring[k] = k;
       g->atoms[k].pos = a->pos;
