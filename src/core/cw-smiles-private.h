@@ -193,8 +193,19 @@ cw_sm_group_rank (const CwGroup *g)
   return 100000 + (g->id ? g_str_hash (g->id) % 1000000 : 0);
 }
 /* Parity of an ordering of four neighbours (symbols 0..3, two bits each, the first lowest):
- * 0 when the four are not all different, 1 odd, 2 even. */
-extern const guint8 cw_sm_permutation_parity[256];
+ * 0 when the four are not all different, 1 odd, 2 even. A copy per file (static): the core is
+ * linked into both chairwise-calc and its drawing module, and one exported table in both would
+ * be two definitions of one object. */
+static const guint8 cw_sm_permutation_parity[256] G_GNUC_UNUSED = {
+  0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 1, 0,
+  0, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 1, 0, 0, 0, 0, 0, 0,
+  0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 1, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0,
+  0, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0,
+  0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 0,
+  0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0,
+  0, 0, 0, 0, 0, 0, 1, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 2, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0,
+  0, 1, 0, 0, 2, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0,
+};
 /* The source position of result position p (1..6), and whether faces are swapped. */
 int      cw_sm_transform_source (const CwRingTransform *t, int p);
 gboolean cw_sm_transform_swaps (const CwRingTransform *t);
