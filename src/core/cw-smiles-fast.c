@@ -255,7 +255,7 @@ scan (Scan *sc, const char *s, int len)
           a = &sc->chain[sc->n_chain++];
           a->pos = i;
           a->bond_before = bond;
-          a->n_branch = a->n_digit = 0;
+          a->n_branch = a->n_digit = a->first_branch = 0;
           a->has_at = FALSE;
           a->chirality = CW_SM_CHIRAL_NONE;
           a->hcount = -1;
