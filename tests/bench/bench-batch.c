@@ -18,25 +18,17 @@
 #include "cw-batch.h"
 #include "cw-core.h"
 #include "cw-smiles.h"
+#include "../core/test-helpers.h"
 
 static void
 write_compound (GRand *rand, const CwGroupTable *table, GString *s)
 {
-  guint          n_groups = cw_group_table_get_n_groups (table);
   const CwGroup *slot[6][2] = { { NULL } };
   int            n_sub = g_rand_int_range (rand, 1, 5), start = g_rand_int_range (rand, 0, 6);
   int            dir = g_rand_boolean (rand) ? 1 : -1;
   gboolean       marks = g_rand_int_range (rand, 0, 8) != 0;
 
-  for (int k = 0; k < n_sub; k++)
-    {
-      int            p = g_rand_int_range (rand, 0, 6);
-      const CwGroup *g = cw_group_table_get (table, g_rand_int_range (rand, 0, n_groups));
-      if (slot[p][0] == NULL)
-        slot[p][0] = g;
-      else if (slot[p][1] == NULL && g_rand_int_range (rand, 0, 3) == 0)
-        slot[p][1] = g;
-    }
+  test_random_slots (rand, table, n_sub, slot);
   for (int i = 0; i < 6; i++)
     {
       int         p = ((start + dir * i) % 6 + 6) % 6;

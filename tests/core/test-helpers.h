@@ -45,3 +45,21 @@ test_load_geometry (void)
   g_assert_nonnull (gd);
   return gd;
 }
+
+/* Generated compounds (tests and benchmarks): n_sub picks of a ring carbon (0..5) and a table
+ * group; a carbon picked twice gets a second group one time in three. slot[carbon][0..1]. */
+static inline void
+test_random_slots (GRand *rand, const CwGroupTable *table, int n_sub, const CwGroup *slot[6][2])
+{
+  guint n_groups = cw_group_table_get_n_groups (table);
+
+  for (int k = 0; k < n_sub; k++)
+    {
+      int            p = g_rand_int_range (rand, 0, 6);
+      const CwGroup *g = cw_group_table_get (table, g_rand_int_range (rand, 0, n_groups));
+      if (slot[p][0] == NULL)
+        slot[p][0] = g;
+      else if (slot[p][1] == NULL && g_rand_int_range (rand, 0, 3) == 0)
+        slot[p][1] = g;
+    }
+}

@@ -161,21 +161,12 @@ generate (GRand *rand, const CwGroupTable *table, GString *s)
   static const char *const one_h[] = { "[C@H]", "[C@@H]", "[C@H]", "[C@@H]", "[CH]", "C", "[C@H1]", "[C@@H2]" };
   static const char *const no_h[] = { "[C@]", "[C@@]", "[C@]", "[C@@]", "[C]", "C", "[13C@]", "[C@TH1]" };
   static const char *const two_h[] = { "C", "C", "[CH2]", "[C@H2]", "[CH]" };
-  guint                    n_groups = cw_group_table_get_n_groups (table);
   const CwGroup           *slot[6][2] = { { NULL } };
   int                      n_sub = g_rand_int_range (rand, 0, 7), start = g_rand_int_range (rand, 0, 6);
   int                      dir = g_rand_boolean (rand) ? 1 : -1, digit = digits[g_rand_int_range (rand, 0, G_N_ELEMENTS (digits))];
   gboolean                 prefix = g_rand_int_range (rand, 0, 3) == 0, tail = g_rand_int_range (rand, 0, 3) == 0;
 
-  for (int k = 0; k < n_sub; k++)
-    {
-      int            p = g_rand_int_range (rand, 0, 6);
-      const CwGroup *g = cw_group_table_get (table, g_rand_int_range (rand, 0, n_groups));
-      if (slot[p][0] == NULL)
-        slot[p][0] = g;
-      else if (slot[p][1] == NULL && g_rand_int_range (rand, 0, 3) == 0)
-        slot[p][1] = g;
-    }
+  test_random_slots (rand, table, n_sub, slot);
   if (g_rand_int_range (rand, 0, 20) == 0)
     g_string_append (s, "[Na+].");
   for (int i = 0; i < 6; i++)
