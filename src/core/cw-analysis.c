@@ -442,8 +442,7 @@ finish_thermo (CwEngine *e, CwFlagCode symmetry, gboolean kinetics)
   const CwRingEnergetics *ring = cw_interaction_table_get_ring (e->data->interactions);
   double T = an->temperature, var = 0, mean, lo, hi, dummy;
 
-  for (int c = 0; c < 2; c++)
-    an->chair[c].energy = chair_sum (&an->chair[c]);
+  /* the chairs' energies were summed by analyze () */
   for (int k = 0; k < e->n_params; k++)
     {
       double d = (e->params[k].coef[1] - e->params[k].coef[0]) * e->params[k].sigma;
@@ -549,7 +548,9 @@ analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, gb
   /* The energy model is invariant under the chair's symmetry operations, so chairs related by
    * symmetry always come out equal; only then is the (costlier) exact test needed. */
   symmetry = CW_N_FLAGS;
-  if (fabs (chair_sum (&out->chair[0]) - chair_sum (&out->chair[1])) < 1e-9)
+  for (int c = 0; c < 2; c++)
+    out->chair[c].energy = chair_sum (&out->chair[c]);
+  if (fabs (out->chair[0].energy - out->chair[1].energy) < 1e-9)
     symmetry = chair_symmetry (mol, out);
   finish_thermo (&e, symmetry, kinetics);
   build_flags (&e, symmetry);

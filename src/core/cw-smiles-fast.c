@@ -56,6 +56,7 @@ typedef struct
   guint8    dg_bond[MAX_DIGITS];
   gint8     dg_pair[MAX_DIGITS];
   int       n_digit;
+  int       n_at; /* bracket atoms holding '@', chain and branches */
 } Scan;
 
 /* Character classes inside a branch: what the scan must look at. */
@@ -164,7 +165,7 @@ scan (Scan *sc, const char *s, int len)
   gboolean bond = FALSE;
   int      i = 0;
 
-  sc->n_chain = sc->n_branch = sc->n_digit = 0;
+  sc->n_chain = sc->n_branch = sc->n_digit = sc->n_at = 0;
   while (i < len)
     {
       char c = s[i];
@@ -218,6 +219,7 @@ scan (Scan *sc, const char *s, int len)
           sc->br_hi[b] = j;
           sc->br_owner[b] = sc->n_chain - 1;
           sc->br_has_at[b] = at;
+          sc->n_at += at;
           if (sc->chain[sc->n_chain - 1].n_branch++ == 0)
             sc->chain[sc->n_chain - 1].first_branch = b;
           sc->n_branch++;
@@ -267,6 +269,7 @@ scan (Scan *sc, const char *s, int len)
               if (j < 0)
                 return FALSE;
               a->has_at = at;
+              sc->n_at += at;
               read_ring_bracket (s, i, j, a);
               i = j + 1;
             }
@@ -448,11 +451,13 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
   g->n_atoms = CW_RING_SIZE;
   g->n_closures = 0;
   g->n_dots = 0;
-  for (int k = 0; k < sc.n_chain; k++)
-    if (k < first || k > first + 5)
-      r->inner_stereo |= sc.chain[k].has_at;
-  for (int b = 0; b < sc.n_branch; b++)
-    r->inner_stereo |= sc.br_has_at[b];
+  /* '@' inside a group: in any bracket atom but the ring carbons' own */
+  {
+    int n_at = sc.n_at;
+    for (int k = 0; k < CW_RING_SIZE; k++)
+      n_at -= sc.chain[first + k].has_at;
+    r->inner_stereo = n_at > 0;
+  }
 
   for (int k = 0; k < CW_RING_SIZE; k++)
     {

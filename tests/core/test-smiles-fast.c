@@ -268,6 +268,9 @@ test_edges (void)
     "C1=CC=CC=C1[C@H]2CC[C@@H](C)CC2", "C-1CCCCC1[C@H]2CC[C@@H](C)CC2", "C-1CCCCC1[C@H]2CC[C@@H](C)CC2",
     "C-1CCCCC1C2CCCCC2", "C-1CCCCC1C2CCCCC2", "C1CCCCC1C2CCCCC2", "C1CCCCC1C2CCCCC2",
     "[C@H]1(c2ccccc2)CC[C@@H](C)CC1", "[C@H]1(c2ccccc2)CC[C@@H](C)CC1", "C[C@H]1CC[C@@H](CC1)c1ccccc1",
+    /* '@' inside a group (not a stereocentre there): read, and named in the notes */
+    "C[C@@H](C)[C@H]1CC[C@@H](C)CC1", "C[C@@H](C)[C@H]1CC[C@@H](C)CC1", "C[C@H]1CC[C@@H]([C@H](C)C)CC1",
+    "C[C@H]1CC[C@@H]([C@H](C)C)CC1", "C[C@H]1CC[C@@H](CC1)[C@H](C)C", "C[C@H]1CC[C@@H](CC1)[C@H](C)C",
   };
   guint64 n_fast;
   int     n_ok;
