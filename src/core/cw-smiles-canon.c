@@ -180,18 +180,20 @@ cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecul
 
   for (int i = 0; i < in->n_subs; i++)
     slot[in->subs[i].position][in->subs[i].face == CW_FACE_UP ? 0 : 1] = &in->subs[i];
+  /* written without branches on the data: every slot is stored, and only a filled one moves
+   * the count on (out->subs has room for the extra store: at most CW_MAX_SUBS - 1 are kept
+   * before the last carbon's two stores) */
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
       int q = source_position (t, p);
       for (int f = 0; f < 2; f++)
         {
           const CwSubstituent *s = slot[q][swap ? 1 - f : f];
-          if (s == NULL)
-            continue;
-          out->subs[n].group = s->group;
-          out->subs[n].position = p;
-          out->subs[n].face = f == 0 ? CW_FACE_UP : CW_FACE_DOWN;
-          n++;
+          int                  k = MIN (n, CW_MAX_SUBS - 1);
+          out->subs[k].group = s ? s->group : NULL;
+          out->subs[k].position = p;
+          out->subs[k].face = f == 0 ? CW_FACE_UP : CW_FACE_DOWN;
+          n += s != NULL;
         }
     }
   out->n_subs = n;
@@ -220,7 +222,8 @@ cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 
   for (int p = 0; p <= CW_RING_SIZE; p++)
     {
       const CwGroup *a = slot[p][0], *b = slot[p][1];
-      relevant[p] = p > 0 && (a != NULL || b != NULL) && cw_sm_group_rank (a) != cw_sm_group_rank (b);
+      /* two empty slots have equal ranks too */
+      relevant[p] = (p > 0) & (cw_sm_group_rank (a) != cw_sm_group_rank (b));
       n += relevant[p];
     }
   return n;
