@@ -200,22 +200,15 @@ write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *rel
 void
 cw_sm_write_molecule (const CwMolecule *mol, const CwSmIndex *index, GString *out)
 {
-  CwMolecule      m;
-  CwRingTransform t;
-  gboolean        relevant[CW_RING_SIZE + 1];
-  gboolean        marks;
+  CwMolecule m;
+  gboolean   relevant[CW_RING_SIZE + 1];
 
-  if (mol->n_subs == 0)
-    {
-      g_string_append (out, "C1CCCCC1");
-      return;
-    }
-  marks = cw_sm_relevant_carbons (mol, relevant) >= 2;
-  cw_sm_canonical_transform (mol, !marks, &t);
+  /* a lone stereocentre is written without @/@@, so mirror images number alike */
+  m.n_subs = mol->n_subs;
   m.custom_groups = NULL;
-  cw_sm_apply_transform (mol, &t, &m);
-  cw_sm_relevant_carbons (&m, relevant);
-  write_numbered (&m, index, relevant, marks, out);
+  memcpy (m.subs, mol->subs, sizeof (CwSubstituent) * mol->n_subs);
+  cw_sm_canonicalize (&m, cw_sm_relevant_carbons (mol, relevant) < 2);
+  cw_sm_write_canonical (&m, index, out);
 }
 
 void

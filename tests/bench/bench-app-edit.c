@@ -8,6 +8,8 @@
  * Targets, for each series: median <= 4 ms, maximum <= 16 ms. */
 #include "config.h"
 
+#include "bench-common.h"
+
 #include <gtk/gtk.h>
 #include <stdio.h>
 #include <stdlib.h>
@@ -36,15 +38,6 @@ after_paint_cb (GdkFrameClock *clock, gpointer data)
       paint_end = g_get_monotonic_time ();
       painted = TRUE;
     }
-}
-
-static double
-cpu_ms (void)
-{
-  struct timespec ts;
-
-  clock_gettime (CLOCK_PROCESS_CPUTIME_ID, &ts);
-  return ts.tv_sec * 1000.0 + ts.tv_nsec / 1e6;
 }
 
 static gboolean
@@ -126,12 +119,12 @@ run_series (CwWindow   *win,
       serial = win->serial;
       frame_start = 0;
       painted = FALSE;
-      cpu[i] = cpu_ms ();
+      cpu[i] = bench_cpu_ms ();
       t0 = g_get_monotonic_time ();
       do_edit (win, series, i);
       t1 = g_get_monotonic_time ();
       wait_frame ();
-      cpu[i] = cpu_ms () - cpu[i];
+      cpu[i] = bench_cpu_ms () - cpu[i];
       edit_only[i] = (t1 - t0) / 1000.0;
       times[i] = edit_only[i] + (painted ? (paint_end - frame_start) / 1000.0 : 1000.0);
       /* Each edit is a real change of the document, and the temperature ones change K. */

@@ -5,6 +5,8 @@
  * wall-clock median is printed beside it. */
 #include "config.h"
 
+#include "bench-common.h"
+
 #include <glib/gstdio.h>
 #include <stdio.h>
 #include <stdlib.h>
@@ -37,15 +39,6 @@ cmp_double (const void *a, const void *b)
   return (x > y) - (x < y);
 }
 
-static double
-cpu_ms (void)
-{
-  struct timespec ts;
-
-  clock_gettime (CLOCK_PROCESS_CPUTIME_ID, &ts);
-  return ts.tv_sec * 1e3 + ts.tv_nsec / 1e6;
-}
-
 /* Median CPU time in ms; *wall gets the median wall-clock time. */
 static double
 median_ms (Job job, const CwData *data, const CwDocument *doc, const char *path, int runs, double *wall)
@@ -58,11 +51,11 @@ median_ms (Job job, const CwData *data, const CwDocument *doc, const char *path,
   for (int i = 0; i < runs; i++)
     {
       gint64 start = g_get_monotonic_time ();
-      double c0 = cpu_ms ();
+      double c0 = bench_cpu_ms ();
 
       if (!job (data, doc, path))
         g_error ("export to %s failed", path);
-      t[i] = cpu_ms () - c0;
+      t[i] = bench_cpu_ms () - c0;
       w[i] = (g_get_monotonic_time () - start) / 1000.0;
     }
   qsort (t, runs, sizeof t[0], cmp_double);
