@@ -3,6 +3,7 @@
 #include <math.h>
 
 #include "app-test-helpers.h"
+#include "cw-application.h"
 #include "cw-custom-group-dialog.h"
 #include "app-test-window.h"
 
@@ -517,12 +518,50 @@ test_autosave_restore (void)
   destroy_window (win);
 }
 
+static void
+count_notify (GObject *object, GParamSpec *pspec, int *n)
+{
+  (*n)++;
+}
+
+/* The desktop's colour scheme: "prefer-dark" turns on GTK's dark style, anything else turns
+ * it off, and a value that changes nothing does not touch GtkSettings (which would make GTK
+ * load the theme again). */
+static void
+test_dark_style (void)
+{
+  GtkSettings *settings = gtk_settings_get_default ();
+  CwWindow    *win = new_window ();
+  gboolean     dark = TRUE;
+  int          n = 0;
+  gulong       id;
+
+  g_object_set (settings, "gtk-application-prefer-dark-theme", FALSE, NULL);
+  id = g_signal_connect (settings, "notify::gtk-application-prefer-dark-theme", G_CALLBACK (count_notify), &n);
+  cw_application_apply_color_scheme ("default");
+  g_assert_cmpint (n, ==, 0);
+  cw_application_apply_color_scheme ("prefer-dark");
+  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, NULL);
+  g_assert_true (dark);
+  g_assert_cmpint (n, ==, 1);
+  app_test_pump (5, NULL);
+  cw_application_apply_color_scheme ("prefer-dark");
+  g_assert_cmpint (n, ==, 1);
+  cw_application_apply_color_scheme ("prefer-light");
+  g_object_get (settings, "gtk-application-prefer-dark-theme", &dark, NULL);
+  g_assert_false (dark);
+  g_assert_cmpint (n, ==, 2);
+  g_signal_handler_disconnect (settings, id);
+  destroy_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
   if (!app_test_init (&argc, &argv))
     return 0;
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
+  g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
