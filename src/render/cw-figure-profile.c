@@ -42,22 +42,44 @@ curve (const double g[N_STATIONS], double s)
   return g[i] + (g[i + 1] - g[i]) * w;
 }
 
+/* side: 0 centred on the bar, -1 standing out to the left of it, +1 to the right (the chairs
+ * at the ends, so the curve leaving or reaching them does not run through the number). */
 static void
-level_label (CwScene *scene, const CwPlot *plot, double x, double g, const CwRenderOptions *opt, gboolean below)
+level_label (CwScene *scene, const CwPlot *plot, double x, double g, const CwRenderOptions *opt, gboolean below, int side)
 {
   g_autofree char *v = cw_render_format_value (g, opt->unit);
   double           px = cw_plot_x (plot, x), py = cw_plot_y (plot, g);
+  double           lx = side < 0 ? px + 2 : side > 0 ? px - 2 : px, ax = side < 0 ? 1.0 : side > 0 ? 0.0 : 0.5;
 
   cw_scene_line (scene, CW_ROLE_LEVEL, CW_INK_TEXT, px - 14, py, px + 14, py, 2.0);
-  cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, v, 9, FALSE, px, below ? py + 4 : py - 4, 0.5, below ? 0 : 1);
+  cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, v, 9, FALSE, lx, below ? py + 4 : py - 4, ax, below ? 0 : 1);
 }
 
-/* A double arrow between two levels at x, with dotted guides from the stations it refers to. */
-/* Returns the right edge of its label, so the next arrow can stand clear of it. */
+#define ARROW_TEXT 9.5
+
+/* Where the label of an arrow between two levels goes: beside the arrow, half-way up; or, when
+ * the levels are too close for that, above the upper one, clear of the dotted guides. Gives
+ * the label's vertical anchor (as cw_scene_text_at takes it) in *ay. */
 static double
+arrow_label_y (const CwPlot *plot, double ga, double gb, double *ay)
+{
+  double ya = cw_plot_y (plot, ga), yb = cw_plot_y (plot, gb);
+
+  if (fabs (ya - yb) >= 2.0 * ARROW_TEXT)
+    {
+      *ay = 0.5;
+      return 0.5 * (ya + yb);
+    }
+  *ay = 1.0;
+  return MIN (ya, yb) - 3;
+}
+
+/* A double arrow between two levels at x, with dotted guides from the stations it refers to.
+ * Returns its label. */
+static CwPrim *
 vertical_arrow (CwScene *scene, const CwPlot *plot, double px, double ga, double gb, double sa, double sb, const char *markup)
 {
-  double  ya = cw_plot_y (plot, ga), yb = cw_plot_y (plot, gb);
+  double  ya = cw_plot_y (plot, ga), yb = cw_plot_y (plot, gb), ay, ly = arrow_label_y (plot, ga, gb, &ay);
   CwPrim *p;
 
   p = cw_scene_line (scene, CW_ROLE_LEVEL, CW_INK_MUTED, cw_plot_x (plot, sa) + 15, ya, px + 3, ya, 0.7);
@@ -66,8 +88,7 @@ vertical_arrow (CwScene *scene, const CwPlot *plot, double px, double ga, double
   p->dash = 1.0;
   if (fabs (ya - yb) > 9)
     cw_scene_arrow (scene, CW_ROLE_ARROW, CW_INK_TEXT, px, ya, px, yb, 1.0, TRUE);
-  p = cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, markup, 9.5, FALSE, px + 5, 0.5 * (ya + yb), 0.0, 0.5);
-  return p->box.x + p->box.w;
+  return cw_scene_text_at (scene, CW_ROLE_LEVEL, CW_INK_TEXT, markup, ARROW_TEXT, FALSE, px + 5, ly, 0.0, ay);
 }
 
 CwScene *
@@ -84,7 +105,8 @@ cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *a
   g_autofree char *dg_markup = g_strdup_printf ("Δ<i>G</i>° = %s", dg);
   g_autofree char *bar_markup = g_strdup_printf ("Δ<i>G</i><sup>‡</sup> = %s", bar);
   int              low = an->chair[0].energy <= an->chair[1].energy ? 0 : 6;
-  double           right;
+  CwPrim          *bar_label;
+  double           dg_y, dg_ay, dg_x;
 
   levels (data, an, g);
   for (int i = 0; i < N_STATIONS; i++)
@@ -113,12 +135,17 @@ cw_profile_build (const CwData *data, const CwMolecule *mol, const CwAnalysis *a
       gboolean maximum = i == 1 || i == 3 || i == 5;
       double   px = cw_plot_x (&plot, i);
 
-      level_label (scene, &plot, i, g[i], opt, !maximum && i != 0 && i != 6);
+      level_label (scene, &plot, i, g[i], opt, !maximum && i != 0 && i != 6, i == 0 ? -1 : i == 6 ? 1 : 0);
       cw_scene_text_at (scene, CW_ROLE_AXIS, CW_INK_TEXT, _(station_names[i]), 9, i == 0 || i == 6, px, plot.area.y + plot.area.h + 6, 0.5, 0);
     }
   /* Beyond the last station: the barrier from the lower chair, then ΔG° between the chairs. */
-  right = vertical_arrow (scene, &plot, cw_plot_x (&plot, N_STATIONS - 0.5), g[low], g[5], low, 5, bar_markup);
-  vertical_arrow (scene, &plot, MAX (cw_plot_x (&plot, N_STATIONS + 0.2), right + 8), g[0], g[6], 0, 6, dg_markup);
+  bar_label = vertical_arrow (scene, &plot, cw_plot_x (&plot, N_STATIONS - 0.5), g[low], g[5], low, 5, bar_markup);
+  /* the ΔG° arrow stands clear of the barrier's label when its own label would be level with it */
+  dg_y = arrow_label_y (&plot, g[0], g[6], &dg_ay) - dg_ay * 1.4 * ARROW_TEXT;
+  dg_x = cw_plot_x (&plot, N_STATIONS + 0.2);
+  if (dg_y < bar_label->box.y + bar_label->box.h + 2 && dg_y + 1.4 * ARROW_TEXT > bar_label->box.y - 2)
+    dg_x = MAX (dg_x, bar_label->box.x + bar_label->box.w + 8);
+  vertical_arrow (scene, &plot, dg_x, g[0], g[6], 0, 6, dg_markup);
   cw_scene_fit (scene, 4);
   return scene;
 }
