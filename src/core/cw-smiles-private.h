@@ -237,7 +237,12 @@ typedef struct
 CwSmIndex     *cw_sm_index_new (const CwGroupTable *table);
 void           cw_sm_index_free (CwSmIndex *index);
 const CwGroup *cw_sm_index_lookup (const CwSmIndex *index, guint64 hash);
-/* fwd/rev strings of any group: from the index when it holds the group, else computed. */
+/* Texts the SMILES writer copies CW_SM_TEXT_PAD bytes at a time: cw_sm_pad_text reallocates a
+ * string (or NULL) with that many zero bytes after its end. */
+#define CW_SM_TEXT_PAD 16
+char *cw_sm_pad_text (char *text);
+/* fwd/rev strings of any group: from the index when it holds the group, else computed (both
+ * padded as cw_sm_pad_text does). */
 void cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index, char **fwd, char **rev, gboolean *owned);
 
 typedef struct _CwSmilesInfo   CwSmilesInfo;

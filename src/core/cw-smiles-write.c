@@ -46,6 +46,69 @@ ring_token (gboolean marked, int n_groups, const int w[4])
   return clockwise ? 3 : 4;
 }
 
+/* Where a ring carbon stands in the written pattern, which fixes its neighbour order. */
+enum
+{
+  AT_C1_AFTER_GROUP, /* C1 written after its first group */
+  AT_C1_FIRST,       /* C1 written first (its group cannot be written towards the ring) */
+  AT_MIDDLE,         /* C2…C5 */
+  AT_C6,             /* C6, closing ring bond 1 */
+  N_PLACES
+};
+
+/* The neighbour order (previous ring carbon, next, up group, down group, in writing order) of a
+ * marked carbon with n groups, f the face of a single group; h the other face (its H). */
+static void
+neighbour_order (int place, int n, int f, int w[4])
+{
+  int h = f == UP ? DOWN : UP;
+
+  switch (place)
+    {
+    case AT_C1_AFTER_GROUP:
+      memcpy (w, n == 2 ? (int[4]){ UP, PREV, DOWN, NEXT } : (int[4]){ f, h, PREV, NEXT }, sizeof (int[4]));
+      break;
+    case AT_C1_FIRST:
+      memcpy (w, n == 2 ? (int[4]){ PREV, UP, DOWN, NEXT } : (int[4]){ h, PREV, f, NEXT }, sizeof (int[4]));
+      break;
+    case AT_MIDDLE:
+      memcpy (w, n == 2 ? (int[4]){ PREV, UP, DOWN, NEXT } : (int[4]){ PREV, h, f, NEXT }, sizeof (int[4]));
+      break;
+    default:
+      memcpy (w, n == 2 ? (int[4]){ PREV, NEXT, UP, DOWN } : (int[4]){ PREV, h, NEXT, f }, sizeof (int[4]));
+      break;
+    }
+}
+
+/* The token of a marked carbon, by place, number of groups (1 or 2) and single group's face
+ * (0 up, 1 down): worked out once from neighbour_order. */
+static guint8 marked_token[N_PLACES][3][2];
+
+static void
+init_marked_tokens (void)
+{
+  static gsize done = 0;
+
+  if (g_once_init_enter (&done))
+    {
+      for (int place = 0; place < N_PLACES; place++)
+        for (int n = 1; n <= 2; n++)
+          for (int face = 0; face < 2; face++)
+            {
+              int w[4];
+              neighbour_order (place, n, face == 0 ? UP : DOWN, w);
+              marked_token[place][n][face] = ring_token (TRUE, n, w);
+            }
+      g_once_init_leave (&done, 1);
+    }
+}
+
+static inline int
+carbon_token (gboolean marked, int place, int n, int face)
+{
+  return marked_token[place][n][face] & -(int) (marked != 0); /* row n = 0 is all zero */
+}
+
 /* The text of one group: written from its attachment atom (fwd) and towards it (rev, or NULL). */
 typedef struct
 {
@@ -53,6 +116,9 @@ typedef struct
   gsize       fwd_len, rev_len;
   char       *owned_fwd, *owned_rev;
 } GroupText;
+
+static const char      empty_pad[CW_SM_TEXT_PAD] = { 0 };
+static const GroupText empty_text = { empty_pad, NULL, 0, 0, NULL, NULL };
 
 static void
 group_text (const CwGroup *g, const CwSmIndex *index, GroupText *t)
@@ -87,11 +153,32 @@ typedef struct
   char *p;
 } Ctx;
 
+/* A group's text, CW_SM_TEXT_PAD bytes a step: the texts are padded (cw_sm_pad_text) and the
+ * output has room for the overrun, so short texts cost one fixed-size copy. */
+static inline void
+copy_text (char *dst, const char *s, gsize n)
+{
+  memcpy (dst, s, CW_SM_TEXT_PAD);
+  for (gsize k = CW_SM_TEXT_PAD; k < n; k += CW_SM_TEXT_PAD)
+    memcpy (dst + k, s + k, CW_SM_TEXT_PAD);
+}
+
 static inline void
 put (Ctx *c, const char *s, gsize n)
 {
-  memcpy (c->p, s, n);
+  copy_text (c->p, s, n);
   c->p += n;
+}
+
+/* "(text)", or nothing for an empty slot (length 0): written either way, kept only when the
+ * slot holds a group, so the common case takes no branch. */
+static inline void
+put_branch_if (Ctx *c, const GroupText *t)
+{
+  c->p[0] = '(';
+  copy_text (c->p + 1, t->fwd, t->fwd_len);
+  c->p[1 + t->fwd_len] = ')';
+  c->p += t->fwd_len ? t->fwd_len + 2 : 0;
 }
 
 static inline void
@@ -120,15 +207,13 @@ static void
 write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
 {
   int              n = (slot[0] != NULL) + (slot[1] != NULL);
-  int              f = slot[0] != NULL ? UP : DOWN; /* face of the single group */
-  int              h = f == UP ? DOWN : UP;
+  int              face = slot[0] != NULL ? 0 : 1; /* of a single group: 0 up, 1 down */
   const GroupText *first = slot[0] != NULL ? slot[0] : slot[1];
 
   if (p == 1 && first->rev != NULL)
     {
-      int w1[4] = { f, h, PREV, NEXT }, w2[4] = { UP, PREV, DOWN, NEXT };
       put (c, first->rev, first->rev_len);
-      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+      put_token (c, carbon_token (marked, AT_C1_AFTER_GROUP, n, face));
       put_c (c, '1');
       if (n == 2)
         put_branch (c, slot[1]);
@@ -138,8 +223,7 @@ write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
     {
       /* the group cannot be written towards the ring: the ring carbon comes first, its implicit
        * H (if any) first in its neighbour order, then ring bond 1, then the groups */
-      int w1[4] = { h, PREV, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
-      put_token (c, ring_token (marked, n, n == 2 ? w2 : w1));
+      put_token (c, carbon_token (marked, AT_C1_FIRST, n, face));
       put_c (c, '1');
       for (int k = 0; k < 2; k++)
         if (slot[k] != NULL)
@@ -148,26 +232,18 @@ write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
     }
   if (p < CW_RING_SIZE)
     {
-      int w1[4] = { PREV, h, f, NEXT }, w2[4] = { PREV, UP, DOWN, NEXT };
-      put_token (c, n ? ring_token (marked, n, n == 2 ? w2 : w1) : 0);
-      for (int k = 0; k < 2; k++)
-        if (slot[k] != NULL)
-          put_branch (c, slot[k]);
+      put_token (c, carbon_token (marked, AT_MIDDLE, n, face));
+      put_branch_if (c, slot[0] ? slot[0] : &empty_text);
+      put_branch_if (c, slot[1] ? slot[1] : &empty_text);
       return;
     }
   {
-    int w1[4] = { PREV, h, NEXT, f }, w2[4] = { PREV, NEXT, UP, DOWN };
-    int written = 0;
-    put_token (c, n ? ring_token (marked, n, n == 2 ? w2 : w1) : 0);
+    /* C6: a second group is a branch, the last one is written plainly */
+    const GroupText *last = slot[1] ? slot[1] : slot[0] ? slot[0] : &empty_text;
+    put_token (c, carbon_token (marked, AT_C6, n, face));
     put_c (c, '1');
-    for (int k = 0; k < 2; k++)
-      if (slot[k] != NULL)
-        {
-          if (++written < n)
-            put_branch (c, slot[k]);
-          else
-            put (c, slot[k]->fwd, slot[k]->fwd_len);
-        }
+    put_branch_if (c, n == 2 ? slot[0] : &empty_text);
+    put (c, last->fwd, last->fwd_len);
   }
 }
 
@@ -176,20 +252,24 @@ write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *rel
 {
   GroupText        text[CW_MAX_SUBS];
   const GroupText *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  gsize            start = out->len, bound = 6 * 8 + 12; /* tokens are copied 8 bytes at a time */
+  /* tokens are copied 8 bytes at a time, texts CW_SM_TEXT_PAD bytes at a time */
+  gsize            start = out->len, bound = 6 * (8 + 2 * (2 + CW_SM_TEXT_PAD)) + 12;
   Ctx              c;
 
+  init_marked_tokens ();
   for (int i = 0; i < m->n_subs; i++)
     {
       group_text (m->subs[i].group, index, &text[i]);
-      bound += text[i].fwd_len + text[i].rev_len + 2;
+      bound += text[i].fwd_len + text[i].rev_len + 2 + 2 * CW_SM_TEXT_PAD;
       slot[m->subs[i].position][m->subs[i].face == CW_FACE_UP ? 0 : 1] = &text[i];
     }
-  g_string_set_size (out, start + bound);
+  if (out->allocated_len <= start + bound)
+    g_string_set_size (out, start + bound);
   c.p = out->str + start;
   for (int p = 1; p <= CW_RING_SIZE; p++)
     write_position (&c, p, slot[p], marks && relevant[p]);
-  g_string_truncate (out, c.p - out->str);
+  out->len = c.p - out->str;
+  out->str[out->len] = '\0';
   for (int i = 0; i < m->n_subs; i++)
     {
       g_free (text[i].owned_fwd);

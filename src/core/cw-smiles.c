@@ -141,6 +141,8 @@ cw_sm_index_new (const CwGroupTable *table)
             index->ring_inside[i] = CW_SM_RING_CYCLOHEXYL;
         }
       fragment_strings (g, mask, 2, &index->fwd[i], &index->rev[i]);
+      index->fwd[i] = cw_sm_pad_text (index->fwd[i]);
+      index->rev[i] = cw_sm_pad_text (index->rev[i]);
       if (index->fwd[i] && strlen (index->fwd[i]) < 256)
         index->fwd_len[i] = strlen (index->fwd[i]);
       if (index->rev[i] && strlen (index->rev[i]) < 256)
@@ -222,6 +224,21 @@ cw_sm_group_strings (const CwGroup *group, const CwSmIndex *index, char **fwd, c
       *fwd = g_strdup ("*");
       *rev = g_strdup ("*");
     }
+  *fwd = cw_sm_pad_text (*fwd);
+  *rev = cw_sm_pad_text (*rev);
+}
+
+char *
+cw_sm_pad_text (char *text)
+{
+  gsize n;
+
+  if (text == NULL)
+    return NULL;
+  n = strlen (text) + 1;
+  text = g_realloc (text, n + CW_SM_TEXT_PAD);
+  memset (text + n, 0, CW_SM_TEXT_PAD);
+  return text;
 }
 
 /* ---- the reader ---- */
