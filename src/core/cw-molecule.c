@@ -211,10 +211,15 @@ single_face (const CwSubstituent *const found[2], int n)
 void
 cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
 {
-  const CwSubstituent *found[CW_RING_SIZE + 1][2];
-  int                  count[CW_RING_SIZE + 1] = { 0 }, faces[CW_RING_SIZE + 1];
-  int                  n = 0, ref = -1;
+  static const CwSubstituent none = { 0 }; /* read for a carbon without groups, not used */
+  const CwSubstituent       *found[CW_RING_SIZE + 1][2];
+  int                        count[CW_RING_SIZE + 1] = { 0 }, faces[CW_RING_SIZE + 1];
+  guint                      stereo = 0; /* bit p: carbon p has a face of its own */
+  int                        ref, n;
+  char                       buf[8 + 5 * CW_RING_SIZE], *q = buf;
 
+  for (int p = 0; p <= CW_RING_SIZE; p++)
+    found[p][0] = found[p][1] = &none;
   /* the groups of each carbon in one pass (a third one on a carbon is not looked at) */
   for (int i = 0; i < mol->n_subs; i++)
     {
@@ -224,32 +229,32 @@ cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
     }
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
-      faces[p] = single_face (found[p], count[p]);
-      if (faces[p] >= 0)
-        {
-          n++;
-          if (ref < 0)
-            ref = p;
-        }
+      /* loaded for every carbon (an empty one reads "none"), so choosing takes no branch */
+      int f = found[p][0]->face;
+      faces[p] = count[p] == 2 ? single_face (found[p], 2) : count[p] == 1 ? f : -1;
+      stereo |= (guint) (faces[p] >= 0) << p;
     }
+  n = __builtin_popcount (stereo);
   if (n < 2)
     return;
+  ref = g_bit_nth_lsf (stereo, -1);
   if (n == 2)
     {
-      for (int p = ref + 1; p <= CW_RING_SIZE; p++)
-        if (faces[p] >= 0)
-          cw_str_puts (out, faces[p] == faces[ref] ? "cis" : "trans");
+      cw_str_puts (out, faces[g_bit_nth_lsf (stereo, ref)] == faces[ref] ? "cis" : "trans");
       return;
     }
-  /* no printf: batch runs call this once a compound */
-  cw_str_put (out, "r-", 2);
-  cw_str_putc (out, (char) ('0' + ref));
+  /* no printf: batch runs call this once a compound; every carbon after the reference is
+   * written, and kept only when it has a face */
+  memcpy (q, "r-", 2);
+  q[2] = (char) ('0' + ref);
+  q += 3;
   for (int p = ref + 1; p <= CW_RING_SIZE; p++)
-    if (faces[p] >= 0)
-      {
-        cw_str_put (out, faces[p] == faces[ref] ? ", c-" : ", t-", 4);
-        cw_str_putc (out, (char) ('0' + p));
-      }
+    {
+      memcpy (q, faces[p] == faces[ref] ? ", c-" : ", t-", 4);
+      q[4] = (char) ('0' + p);
+      q += faces[p] >= 0 ? 5 : 0;
+    }
+  cw_str_put (out, buf, q - buf);
 }
 
 char *

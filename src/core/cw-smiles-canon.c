@@ -214,16 +214,18 @@ cw_sm_canonicalize (CwMolecule *mol, gboolean mirror)
 int
 cw_sm_relevant_carbons (const CwMolecule *mol, gboolean relevant[CW_RING_SIZE + 1])
 {
-  const CwGroup *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  int            n = 0;
+  gint64 rank[CW_RING_SIZE + 1][2];
+  int    n = 0;
 
-  for (int i = 0; i < mol->n_subs; i++)
-    slot[mol->subs[i].position][mol->subs[i].face == CW_FACE_UP ? 0 : 1] = mol->subs[i].group;
+  /* ranks, an empty slot ranking as cw_sm_group_rank (NULL) does: two empty slots are equal */
   for (int p = 0; p <= CW_RING_SIZE; p++)
+    rank[p][0] = rank[p][1] = cw_sm_group_rank (NULL);
+  for (int i = 0; i < mol->n_subs; i++)
+    rank[mol->subs[i].position][mol->subs[i].face == CW_FACE_UP ? 0 : 1] = cw_sm_group_rank (mol->subs[i].group);
+  relevant[0] = FALSE;
+  for (int p = 1; p <= CW_RING_SIZE; p++)
     {
-      const CwGroup *a = slot[p][0], *b = slot[p][1];
-      /* two empty slots have equal ranks too */
-      relevant[p] = (p > 0) & (cw_sm_group_rank (a) != cw_sm_group_rank (b));
+      relevant[p] = rank[p][0] != rank[p][1];
       n += relevant[p];
     }
   return n;
