@@ -52,6 +52,8 @@ typedef struct
   GString              *notes;
   CacheEntry           *cache;
   guint64              *tags;
+  const char           *flag_name[CW_N_FLAGS];
+  guint8                flag_len[CW_N_FLAGS];
   CwBatchSummary       *sum;
   gboolean              csv;
   int                   smiles_col, id_col;
@@ -175,9 +177,10 @@ fmt_sig (char *buf, double x)
     return g_snprintf (buf, 32, "%g", x);
   if (x >= 1e-3 && x < 1e6)
     {
-      /* the decade by comparison (the usual case), not by a logarithm */
-      for (e = -3; x >= p10[e + 4]; e++)
-        ;
+      /* the decade by comparison (the usual case), not by a logarithm; summed, not looped */
+      e = -3;
+      for (int k = 1; k < (int) G_N_ELEMENTS (p10); k++)
+        e += x >= p10[k];
       return fmt_fixed (buf, x, MAX (0, 3 - e));
     }
   e = (int) floor (log10 (x));
@@ -320,11 +323,11 @@ format_result (Batch *b, const CwMolecule *m, const CwAnalysis *an, GString *s)
         continue;
       seen |= 1u << code;
       if (n_flags)
-        cw_str_putc (s, b->opt->json ? ',' : ';');
-      if (b->opt->json)
+        cw_str_putc (s, json ? ',' : ';');
+      if (json)
         cw_str_putc (s, '"');
-      cw_str_puts (s, cw_flag_code_to_string (code));
-      if (b->opt->json)
+      cw_str_put (s, b->flag_name[code], b->flag_len[code]);
+      if (json)
         cw_str_putc (s, '"');
       n_flags++;
     }
@@ -338,7 +341,8 @@ static gboolean
 molecule_key (const CwMolecule *m, gint64 key[CW_SM_KEY_LEN])
 {
   G_STATIC_ASSERT (1 + (CW_MAX_SUBS + 1) / 2 <= CW_SM_KEY_LEN);
-  memset (key, 0, sizeof (gint64) * CW_SM_KEY_LEN);
+  for (int i = 0; i < CW_SM_KEY_LEN; i++) /* a fixed count of stores, no library call */
+    key[i] = 0;
   key[0] = m->n_subs;
   for (int i = 0; i < m->n_subs; i++)
     {
@@ -376,7 +380,8 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
       /* a group outside the table: no caching */
       if (!cw_analyze_equilibrium (b->data, m, &b->cond, &b->an, error))
         return NULL;
-      g_string_truncate (b->scratch, 0);
+      b->scratch->len = 0; /* g_string_truncate, without the call */
+      b->scratch->str[0] = '\0';
       format_result (b, m, &b->an, b->scratch);
       *len = b->scratch->len;
       return b->scratch->str;
@@ -391,7 +396,8 @@ result_text (Batch *b, const CwMolecule *m, gsize *len, GError **error)
     }
   if (!cw_analyze_equilibrium (b->data, m, &b->cond, &b->an, error))
     return NULL;
-  g_string_truncate (b->scratch, 0);
+  b->scratch->len = 0;
+  b->scratch->str[0] = '\0';
   format_result (b, m, &b->an, b->scratch);
   if (b->scratch->len < CACHE_TEXT)
     {
@@ -770,6 +776,11 @@ cw_batch_run (const CwData *data, FILE *in, FILE *out, FILE *err, const CwBatchO
   b->scratch = g_string_sized_new (512);
   b->cache = g_new (CacheEntry, CACHE_SLOTS);
   b->tags = g_new0 (guint64, CACHE_SLOTS);
+  for (int k = 0; k < CW_N_FLAGS; k++)
+    {
+      b->flag_name[k] = cw_flag_code_to_string (k);
+      b->flag_len[k] = strlen (b->flag_name[k]);
+    }
   b->sum = summary;
   b->first_row = TRUE;
   b->smiles_col = -2;

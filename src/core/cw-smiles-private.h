@@ -85,8 +85,16 @@ cw_sm_frag_key (const char *text, int lo, int hi, int root_off)
       key = (key ^ w) * 0x9e3779b97f4a7c15ull;
       key ^= key >> 29;
     }
-  for (w = 0; i < hi; i++)
-    w = w << 8 | (guchar) text[i];
+  if (hi >= 8)
+    {
+      /* the last hi - i (0..7) bytes, first one highest: the eight bytes ending at hi, byte
+       * order reversed, masked (the same value as the loop below, without its branches) */
+      memcpy (&w, text + hi - 8, 8);
+      w = GUINT64_FROM_BE (w) & ((G_GUINT64_CONSTANT (1) << (8 * (hi - i))) - 1);
+    }
+  else
+    for (w = 0; i < hi; i++)
+      w = w << 8 | (guchar) text[i];
   key = (key ^ w) * 0x9e3779b97f4a7c15ull;
   return key ^ (key >> 32);
 }
