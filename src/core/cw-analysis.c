@@ -39,6 +39,10 @@ typedef struct
   int estimate_a, estimate_b;
   guint64 estimated_pairs[(CW_MAX_SUBS * CW_MAX_SUBS + 63) / 64]; /* bit a * CW_MAX_SUBS + b, a < b */
   int n_estimated_pairs;
+  double energy[2]; /* each chair's terms summed as they are made, in their order */
+  int first_constant, first_solvent, first_custom; /* substituents for the flags, or -1 */
+  CwFlag pair_flags[CW_MAX_FLAGS]; /* found with the pair terms, added in build_flags */
+  int n_pair_flags;
 } CwEngine;
 
 enum { PARAM_A, PARAM_PAIR, PARAM_FALLBACK_SYN, PARAM_FALLBACK_GAUCHE };
@@ -132,6 +136,7 @@ add_axial_term (CwEngine *e, int chair, int s)
   const CwGroup *g = e->mol->subs[s].group;
 
   t->energy = e->a[s];
+  e->energy[chair] += t->energy;
   t->sigma = e->a_sigma[s];
   t->temperature_dependent = e->a_thermo[s];
   if (e->cond->solvent == CW_SOLVENT_PROTIC && g->has_protic)
@@ -209,10 +214,12 @@ add_pair_term (CwEngine *e, int chair, CwTermKind kind, int a, int b)
       t->temperature_dependent = e->a_thermo[a] || e->a_thermo[b];
     }
   t->energy = value;
+  e->energy[chair] += value;
   t->sigma = sigma;
 }
 
-static void
+/* Returns the tabulated correction, or NULL. */
+static const CwPairEntry *
 add_geminal_term (CwEngine *e, int a, int b)
 {
   const CwGroup *ga = e->mol->subs[a].group, *gb = e->mol->subs[b].group;
@@ -221,16 +228,18 @@ add_geminal_term (CwEngine *e, int a, int b)
   int target = swapped ? a : b; /* the substituent that plays the entry's "b" */
 
   if (entry == NULL)
-    return;
+    return NULL;
   for (int chair = 0; chair < 2; chair++)
     if (e->out->chair[chair].axial[target])
       {
         CwTerm *t = new_term (e, chair, CW_TERM_GEMINAL, a, b);
         t->energy = entry->value;
+        e->energy[chair] += t->energy;
         t->sigma = entry->sigma;
         t->source = entry->source;
         add_param (e, chair, PARAM_PAIR, entry, NULL, entry->sigma, 1.0);
       }
+  return entry;
 }
 
 static int
@@ -240,10 +249,49 @@ ring_distance (int p, int q)
   return MIN (d, CW_RING_SIZE - d);
 }
 
+static gboolean
+is_branched_or_aryl (const CwGroup *g)
+{
+  return g->klass == CW_CLASS_ARYL || g->klass == CW_CLASS_BRANCHED_ALKYL;
+}
+
+/* The flag a pair raises, if any, kept for build_flags. The conditions are combined without
+ * short cuts: they depend on the molecule, and one test is cheaper than a chain of guesses. */
+static void
+note_pair_flag (CwEngine *e, int i, int j, int d, const CwPairEntry *geminal)
+{
+  const CwMolecule *mol = e->mol;
+  const CwGroup    *gi = mol->subs[i].group, *gj = mol->subs[j].group;
+  /* Diaxial in one chair and diequatorial in the other: the case where dipoles decide. */
+  gboolean trans_like = e->out->chair[0].axial[i] == e->out->chair[0].axial[j];
+  gboolean polar = (d == 1) & !!gi->polar & !!gj->polar & trans_like;
+  gboolean dihalide = (d == 3) & (gi->klass == CW_CLASS_HALOGEN) & (gj->klass == CW_CLASS_HALOGEN) & trans_like;
+  gboolean hbond = (d == 2) & (mol->subs[i].face == mol->subs[j].face) &
+                   ((!!gi->hbond_donor & !!gj->hbond_acceptor) | (!!gj->hbond_donor & !!gi->hbond_acceptor));
+  gboolean gem = (d == 0) & (is_branched_or_aryl (gi) | is_branched_or_aryl (gj)) & (geminal == NULL);
+  CwFlagCode code;
+
+  if (!(polar | dihalide | hbond | gem) || e->n_pair_flags >= CW_MAX_FLAGS)
+    return;
+  code = polar ? CW_FLAG_POLAR_VICINAL : dihalide ? CW_FLAG_DIHALIDE_1_4 : hbond ? CW_FLAG_HBOND_1_3 : CW_FLAG_GEMINAL_NONADDITIVE;
+  e->pair_flags[e->n_pair_flags++] = (CwFlag) { code, i, j, 0 };
+}
+
+/* Which pair term two groups d carbons apart make in a chair, by whether each is axial:
+ * syn-1,3-diaxial for 1,3 both axial, gauche for vicinal unless both are axial (trans
+ * diaxial), none otherwise (-1). */
+static const gint8 pair_kind[4][2][2] = {
+  { { -1, -1 }, { -1, -1 } },
+  { { CW_TERM_GAUCHE, CW_TERM_GAUCHE }, { CW_TERM_GAUCHE, -1 } },
+  { { -1, -1 }, { -1, CW_TERM_SYN_AXIAL } },
+  { { -1, -1 }, { -1, -1 } },
+};
+
 static void
 build_terms (CwEngine *e)
 {
   const CwMolecule *mol = e->mol;
+  const gboolean   *ax0 = e->out->chair[0].axial, *ax1 = e->out->chair[1].axial;
 
   for (int chair = 0; chair < 2; chair++)
     for (int i = 0; i < mol->n_subs; i++)
@@ -252,19 +300,17 @@ build_terms (CwEngine *e)
   for (int i = 0; i < mol->n_subs; i++)
     for (int j = i + 1; j < mol->n_subs; j++)
       {
-        int d = ring_distance (mol->subs[i].position, mol->subs[j].position);
+        int                d = ring_distance (mol->subs[i].position, mol->subs[j].position);
+        int                k0 = pair_kind[d][!!ax0[i]][!!ax0[j]], k1 = pair_kind[d][!!ax1[i]][!!ax1[j]];
+        const CwPairEntry *geminal = NULL;
 
-        for (int chair = 0; chair < 2; chair++)
-          {
-            gboolean ai = e->out->chair[chair].axial[i], aj = e->out->chair[chair].axial[j];
-
-            if (d == 2 && ai && aj)
-              add_pair_term (e, chair, CW_TERM_SYN_AXIAL, i, j);
-            else if (d == 1 && !(ai && aj))
-              add_pair_term (e, chair, CW_TERM_GAUCHE, i, j);
-          }
+        if (k0 >= 0)
+          add_pair_term (e, 0, k0, i, j);
+        if (k1 >= 0)
+          add_pair_term (e, 1, k1, i, j);
         if (d == 0)
-          add_geminal_term (e, i, j);
+          geminal = add_geminal_term (e, i, j);
+        note_pair_flag (e, i, j, d, geminal);
       }
 }
 
@@ -360,33 +406,6 @@ cw_analysis_has_flag (const CwAnalysis *an, CwFlagCode code)
   return FALSE;
 }
 
-static gboolean
-is_branched_or_aryl (const CwGroup *g)
-{
-  return g->klass == CW_CLASS_ARYL || g->klass == CW_CLASS_BRANCHED_ALKYL;
-}
-
-static void
-pair_flags (CwEngine *e, int i, int j)
-{
-  const CwMolecule *mol = e->mol;
-  const CwGroup *gi = mol->subs[i].group, *gj = mol->subs[j].group;
-  int d = ring_distance (mol->subs[i].position, mol->subs[j].position);
-  /* Diaxial in one chair and diequatorial in the other: the case where dipoles decide. */
-  gboolean trans_like = e->out->chair[0].axial[i] == e->out->chair[0].axial[j];
-
-  if (d == 1 && gi->polar && gj->polar && trans_like)
-    add_flag (e->out, CW_FLAG_POLAR_VICINAL, i, j, 0);
-  else if (d == 3 && gi->klass == CW_CLASS_HALOGEN && gj->klass == CW_CLASS_HALOGEN && trans_like)
-    add_flag (e->out, CW_FLAG_DIHALIDE_1_4, i, j, 0);
-  else if (d == 2 && mol->subs[i].face == mol->subs[j].face &&
-           ((gi->hbond_donor && gj->hbond_acceptor) || (gj->hbond_donor && gi->hbond_acceptor)))
-    add_flag (e->out, CW_FLAG_HBOND_1_3, i, j, 0);
-  else if (d == 0 && (is_branched_or_aryl (gi) || is_branched_or_aryl (gj)) &&
-           cw_data_find_pair (e->data, CW_PAIR_GEMINAL, gi, gj, NULL) == NULL)
-    add_flag (e->out, CW_FLAG_GEMINAL_NONADDITIVE, i, j, 0);
-}
-
 static void
 build_flags (CwEngine *e, CwFlagCode symmetry)
 {
@@ -394,7 +413,7 @@ build_flags (CwEngine *e, CwFlagCode symmetry)
   const CwMolecule *mol = e->mol;
   const CwRingEnergetics *ring = cw_interaction_table_get_ring (e->data->interactions);
   double better = MIN (an->chair[0].energy, an->chair[1].energy);
-  int constant = -1, solvent = -1, custom = -1;
+  int constant = e->first_constant, solvent = e->first_solvent, custom = e->first_custom;
 
   if (mol->n_subs == 0)
     add_flag (an, CW_FLAG_NO_SUBSTITUENTS, -1, -1, 0);
@@ -402,37 +421,16 @@ build_flags (CwEngine *e, CwFlagCode symmetry)
     add_flag (an, symmetry, -1, -1, 0);
   if (better >= an->twist_boat - ring->twist_boat_margin)
     add_flag (an, CW_FLAG_TWIST_BOAT, -1, -1, an->twist_boat);
-  for (int i = 0; i < mol->n_subs; i++)
-    for (int j = i + 1; j < mol->n_subs; j++)
-      pair_flags (e, i, j);
+  for (int k = 0; k < e->n_pair_flags; k++)
+    add_flag (an, e->pair_flags[k].code, e->pair_flags[k].sub_a, e->pair_flags[k].sub_b, 0);
   if (e->any_estimate)
     add_flag (an, CW_FLAG_ESTIMATED_TERM, e->estimate_a, e->estimate_b, e->n_estimated_pairs);
-  for (int i = 0; i < mol->n_subs; i++)
-    {
-      const CwGroup *g = mol->subs[i].group;
-      if (!e->a_thermo[i] && constant < 0)
-        constant = i;
-      if (g->has_protic && solvent < 0)
-        solvent = i;
-      if (g->custom && custom < 0)
-        custom = i;
-    }
   if (constant >= 0)
     add_flag (an, CW_FLAG_CONSTANT_A, constant, -1, 0);
   if (solvent >= 0)
     add_flag (an, CW_FLAG_SOLVENT_SENSITIVE, solvent, -1, 0);
   if (custom >= 0)
     add_flag (an, CW_FLAG_CUSTOM_GROUP, custom, -1, 0);
-}
-
-static double
-chair_sum (const CwChair *c)
-{
-  double sum = 0;
-
-  for (int k = 0; k < c->n_terms; k++)
-    sum += c->terms[k].energy;
-  return sum;
 }
 
 static void
@@ -532,24 +530,31 @@ analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, gb
   e.any_estimate = FALSE;
   memset (e.estimated_pairs, 0, sizeof e.estimated_pairs);
   e.n_estimated_pairs = 0;
+  e.energy[0] = e.energy[1] = 0;
+  e.first_constant = e.first_solvent = e.first_custom = -1;
+  e.n_pair_flags = 0;
   out->temperature = cond->temperature;
   out->solvent = cond->solvent;
   out->n_flags = 0;
-  for (int c = 0; c < 2; c++)
+  out->chair[0].n_terms = out->chair[1].n_terms = 0;
+  /* one pass over the groups: axial in which chair, A at T, what the flags need */
+  for (int i = mol->n_subs - 1; i >= 0; i--)
     {
-      out->chair[c].n_terms = 0;
-      for (int i = 0; i < mol->n_subs; i++)
-        out->chair[c].axial[i] = is_axial (&mol->subs[i], c);
+      const CwGroup *g = mol->subs[i].group;
+      out->chair[0].axial[i] = is_axial (&mol->subs[i], 0);
+      out->chair[1].axial[i] = is_axial (&mol->subs[i], 1);
+      e.a[i] = cw_group_a_value (g, cond->temperature, cond->solvent, &e.a_sigma[i], &e.a_thermo[i]);
+      /* walked backwards, so each ends at the first such group */
+      e.first_constant = !e.a_thermo[i] ? i : e.first_constant;
+      e.first_solvent = g->has_protic ? i : e.first_solvent;
+      e.first_custom = g->custom ? i : e.first_custom;
     }
-  for (int i = 0; i < mol->n_subs; i++)
-    e.a[i] = cw_group_a_value (mol->subs[i].group, cond->temperature, cond->solvent,
-                               &e.a_sigma[i], &e.a_thermo[i]);
   build_terms (&e);
   /* The energy model is invariant under the chair's symmetry operations, so chairs related by
    * symmetry always come out equal; only then is the (costlier) exact test needed. */
   symmetry = CW_N_FLAGS;
   for (int c = 0; c < 2; c++)
-    out->chair[c].energy = chair_sum (&out->chair[c]);
+    out->chair[c].energy = e.energy[c];
   if (fabs (out->chair[0].energy - out->chair[1].energy) < 1e-9)
     symmetry = chair_symmetry (mol, out);
   finish_thermo (&e, symmetry, kinetics);
