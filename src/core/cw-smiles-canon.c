@@ -107,9 +107,8 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
 {
   guint64 packed[2][CW_RING_SIZE + 1], best[CW_RING_SIZE + 1], rank[CW_RING_SIZE + 1][2];
   int     count[CW_RING_SIZE + 1] = { 0 }, max_count = 0;
-  guint   best_occupancy = 0, fwd = 0, bwd = 0;
+  guint   best_occupancy = 0x1000, fwd = 0, bwd = 0; /* above every 12-bit occupancy: the first candidate wins */
   int     starts[CW_RING_SIZE], n_starts = 0;
-  gboolean have = FALSE;
 
   for (int p = 1; p <= CW_RING_SIZE; p++)
     rank[p][0] = rank[p][1] = (1 << 21) - 1;
@@ -132,8 +131,8 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
     {
       fwd = fwd << 2 | (guint) (2 - count[p]);
       bwd = bwd << 2 | (guint) (2 - count[source_table[1][1][p]]);
-      if (count[p] == max_count)
-        starts[n_starts++] = p;
+      starts[n_starts] = p; /* kept when p has the most groups */
+      n_starts += count[p] == max_count;
     }
   /* only numberings that start on a carbon with the most groups can win; of those the ones
    * with the lowest locants, then the lowest ranks; the first of equals is kept */
@@ -152,9 +151,9 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
           guint               seq = d ? bwd : fwd;
           sh = turn[d][st];
           occupancy = ((seq << sh) | (seq >> (12 - sh))) & 0xfff;
-          if (have && occupancy > best_occupancy)
+          if (occupancy > best_occupancy)
             continue;
-          if (have && occupancy == best_occupancy)
+          if (occupancy == best_occupancy)
             {
               for (p = 1; p <= CW_RING_SIZE && pk[src[p]] == best[p]; p++)
                 ;
@@ -167,7 +166,6 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
           out->start = st;
           out->dir = d ? -1 : 1;
           out->flip = f;
-          have = TRUE;
         }
 }
 
