@@ -172,10 +172,13 @@ cw_sm_canonical_transform (const CwMolecule *mol, gboolean mirror, CwRingTransfo
 void
 cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecule *out)
 {
-  const CwSubstituent *slot[CW_RING_SIZE + 1][2] = { { NULL } };
-  gboolean             swap = swaps_faces (t);
-  int                  n = 0;
+  static const CwSubstituent none = { NULL }; /* an empty slot: no group */
+  const CwSubstituent       *slot[CW_RING_SIZE + 1][2];
+  gboolean                   swap = swaps_faces (t);
+  int                        n = 0;
 
+  for (int p = 0; p <= CW_RING_SIZE; p++)
+    slot[p][0] = slot[p][1] = &none;
   for (int i = 0; i < in->n_subs; i++)
     slot[in->subs[i].position][in->subs[i].face == CW_FACE_UP ? 0 : 1] = &in->subs[i];
   /* written without branches on the data: every slot is stored, and only a filled one moves
@@ -188,10 +191,10 @@ cw_sm_apply_transform (const CwMolecule *in, const CwRingTransform *t, CwMolecul
         {
           const CwSubstituent *s = slot[q][swap ? 1 - f : f];
           int                  k = MIN (n, CW_MAX_SUBS - 1);
-          out->subs[k].group = s ? s->group : NULL;
+          out->subs[k].group = s->group;
           out->subs[k].position = p;
           out->subs[k].face = f == 0 ? CW_FACE_UP : CW_FACE_DOWN;
-          n += s != NULL;
+          n += s != &none;
         }
     }
   out->n_subs = n;
@@ -205,7 +208,7 @@ cw_sm_canonicalize (CwMolecule *mol, gboolean mirror)
 
   cw_sm_canonical_transform (mol, mirror, &t);
   cw_sm_apply_transform (mol, &t, &tmp);
-  memcpy (mol->subs, tmp.subs, sizeof (CwSubstituent) * tmp.n_subs);
+  memcpy (mol->subs, tmp.subs, sizeof mol->subs); /* all of it: a fixed size, copied inline */
   mol->n_subs = tmp.n_subs;
 }
 
