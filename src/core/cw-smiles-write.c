@@ -203,14 +203,17 @@ put_branch (Ctx *c, const GroupText *t)
   put_c (c, ')');
 }
 
+/* C1: its first group written towards the ring when it can be, then the ring carbon and ring
+ * bond 1; otherwise the ring carbon first, its implicit H (if any) first in its neighbour
+ * order, then ring bond 1, then the groups. */
 static void
-write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
+write_c1 (Ctx *c, const GroupText *slot[2], gboolean marked)
 {
   int              n = (slot[0] != NULL) + (slot[1] != NULL);
   int              face = slot[0] != NULL ? 0 : 1; /* of a single group: 0 up, 1 down */
   const GroupText *first = slot[0] != NULL ? slot[0] : slot[1];
 
-  if (p == 1 && first->rev != NULL)
+  if (first != NULL && first->rev != NULL)
     {
       put (c, first->rev, first->rev_len);
       put_token (c, carbon_token (marked, AT_C1_AFTER_GROUP, n, face));
@@ -219,32 +222,37 @@ write_position (Ctx *c, int p, const GroupText *slot[2], gboolean marked)
         put_branch (c, slot[1]);
       return;
     }
-  if (p == 1)
-    {
-      /* the group cannot be written towards the ring: the ring carbon comes first, its implicit
-       * H (if any) first in its neighbour order, then ring bond 1, then the groups */
-      put_token (c, carbon_token (marked, AT_C1_FIRST, n, face));
-      put_c (c, '1');
-      for (int k = 0; k < 2; k++)
-        if (slot[k] != NULL)
-          put_branch (c, slot[k]);
-      return;
-    }
-  if (p < CW_RING_SIZE)
-    {
-      put_token (c, carbon_token (marked, AT_MIDDLE, n, face));
-      put_branch_if (c, slot[0] ? slot[0] : &empty_text);
-      put_branch_if (c, slot[1] ? slot[1] : &empty_text);
-      return;
-    }
-  {
-    /* C6: a second group is a branch, the last one is written plainly */
-    const GroupText *last = slot[1] ? slot[1] : slot[0] ? slot[0] : &empty_text;
-    put_token (c, carbon_token (marked, AT_C6, n, face));
-    put_c (c, '1');
-    put_branch_if (c, n == 2 ? slot[0] : &empty_text);
-    put (c, last->fwd, last->fwd_len);
-  }
+  put_token (c, carbon_token (marked, AT_C1_FIRST, n, face));
+  put_c (c, '1');
+  for (int k = 0; k < 2; k++)
+    if (slot[k] != NULL)
+      put_branch (c, slot[k]);
+}
+
+/* C2…C5: the carbon, then its groups as branches. */
+static inline void
+write_middle (Ctx *c, const GroupText *slot[2], gboolean marked)
+{
+  int n = (slot[0] != NULL) + (slot[1] != NULL);
+  int face = slot[0] != NULL ? 0 : 1;
+
+  put_token (c, carbon_token (marked, AT_MIDDLE, n, face));
+  put_branch_if (c, slot[0] ? slot[0] : &empty_text);
+  put_branch_if (c, slot[1] ? slot[1] : &empty_text);
+}
+
+/* C6: the carbon, ring bond 1, a second group as a branch, the last one written plainly. */
+static inline void
+write_c6 (Ctx *c, const GroupText *slot[2], gboolean marked)
+{
+  int              n = (slot[0] != NULL) + (slot[1] != NULL);
+  int              face = slot[0] != NULL ? 0 : 1;
+  const GroupText *last = slot[1] ? slot[1] : slot[0] ? slot[0] : &empty_text;
+
+  put_token (c, carbon_token (marked, AT_C6, n, face));
+  put_c (c, '1');
+  put_branch_if (c, n == 2 ? slot[0] : &empty_text);
+  put (c, last->fwd, last->fwd_len);
 }
 
 static void
@@ -255,22 +263,26 @@ write_numbered (const CwMolecule *m, const CwSmIndex *index, const gboolean *rel
   /* tokens are copied 8 bytes at a time, texts CW_SM_TEXT_PAD bytes at a time */
   gsize            start = out->len, bound = 6 * (8 + 2 * (2 + CW_SM_TEXT_PAD)) + 12;
   Ctx              c;
+  gboolean         owned = FALSE; /* texts made here, to be freed */
 
   init_marked_tokens ();
   for (int i = 0; i < m->n_subs; i++)
     {
       group_text (m->subs[i].group, index, &text[i]);
+      owned |= text[i].owned_fwd != NULL || text[i].owned_rev != NULL;
       bound += text[i].fwd_len + text[i].rev_len + 2 + 2 * CW_SM_TEXT_PAD;
       slot[m->subs[i].position][m->subs[i].face == CW_FACE_UP ? 0 : 1] = &text[i];
     }
   if (out->allocated_len <= start + bound)
     g_string_set_size (out, start + bound);
   c.p = out->str + start;
-  for (int p = 1; p <= CW_RING_SIZE; p++)
-    write_position (&c, p, slot[p], marks && relevant[p]);
+  write_c1 (&c, slot[1], marks && relevant[1]);
+  for (int p = 2; p < CW_RING_SIZE; p++)
+    write_middle (&c, slot[p], marks && relevant[p]);
+  write_c6 (&c, slot[CW_RING_SIZE], marks && relevant[CW_RING_SIZE]);
   out->len = c.p - out->str;
   out->str[out->len] = '\0';
-  for (int i = 0; i < m->n_subs; i++)
+  for (int i = 0; i < m->n_subs && owned; i++)
     {
       g_free (text[i].owned_fwd);
       g_free (text[i].owned_rev);
