@@ -41,7 +41,7 @@ typedef struct
   int n_estimated_pairs;
   double energy[2]; /* each chair's terms summed as they are made, in their order */
   int first_constant, first_solvent, first_custom; /* substituents for the flags, or -1 */
-  CwFlag pair_flags[CW_MAX_FLAGS]; /* found with the pair terms, added in build_flags */
+  CwFlag pair_flags[CW_MAX_SUBS * (CW_MAX_SUBS - 1) / 2]; /* one per pair at most: found with the pair terms, added in build_flags */
   int n_pair_flags;
 } CwEngine;
 
@@ -255,10 +255,12 @@ is_branched_or_aryl (const CwGroup *g)
   return g->klass == CW_CLASS_ARYL || g->klass == CW_CLASS_BRANCHED_ALKYL;
 }
 
-/* The flag a pair raises, if any, kept for build_flags. The conditions are combined without
- * short cuts: they depend on the molecule, and one test is cheaper than a chain of guesses. */
-static void
-note_pair_flag (CwEngine *e, int i, int j, int d, const CwPairEntry *geminal)
+/* The flag a pair raises, if any, kept for build_flags; returns its index there, or -1. The
+ * conditions are combined without short cuts: they depend on the molecule, and one test is
+ * cheaper than a chain of guesses. A geminal pair's flag is kept provisionally: it stands only
+ * if no geminal correction is tabulated (build_terms withdraws it otherwise). */
+static int
+note_pair_flag (CwEngine *e, int i, int j, int d)
 {
   const CwMolecule *mol = e->mol;
   const CwGroup    *gi = mol->subs[i].group, *gj = mol->subs[j].group;
@@ -268,13 +270,14 @@ note_pair_flag (CwEngine *e, int i, int j, int d, const CwPairEntry *geminal)
   gboolean dihalide = (d == 3) & (gi->klass == CW_CLASS_HALOGEN) & (gj->klass == CW_CLASS_HALOGEN) & trans_like;
   gboolean hbond = (d == 2) & (mol->subs[i].face == mol->subs[j].face) &
                    ((!!gi->hbond_donor & !!gj->hbond_acceptor) | (!!gj->hbond_donor & !!gi->hbond_acceptor));
-  gboolean gem = (d == 0) & (is_branched_or_aryl (gi) | is_branched_or_aryl (gj)) & (geminal == NULL);
+  gboolean gem = (d == 0) & (is_branched_or_aryl (gi) | is_branched_or_aryl (gj));
   CwFlagCode code;
 
-  if (!(polar | dihalide | hbond | gem) || e->n_pair_flags >= CW_MAX_FLAGS)
-    return;
+  if (!(polar | dihalide | hbond | gem))
+    return -1;
   code = polar ? CW_FLAG_POLAR_VICINAL : dihalide ? CW_FLAG_DIHALIDE_1_4 : hbond ? CW_FLAG_HBOND_1_3 : CW_FLAG_GEMINAL_NONADDITIVE;
-  e->pair_flags[e->n_pair_flags++] = (CwFlag) { code, i, j, 0 };
+  e->pair_flags[e->n_pair_flags] = (CwFlag) { code, i, j, 0 };
+  return e->n_pair_flags++;
 }
 
 /* Which pair term two groups d carbons apart make in a chair, by whether each is axial:
@@ -287,31 +290,57 @@ static const gint8 pair_kind[4][2][2] = {
   { { -1, -1 }, { -1, -1 } },
 };
 
+/* One pair term to make: groups i < j, in chair 0 or 1 or (GEMINAL_STEP) the geminal
+ * correction, and for that one the provisional flag to withdraw if a correction is found. */
+#define GEMINAL_STEP 2
+typedef struct
+{
+  guint8 i, j, what, kind;
+  gint8  flag;
+} PairStep;
+
 static void
 build_terms (CwEngine *e)
 {
   const CwMolecule *mol = e->mol;
   const gboolean   *ax0 = e->out->chair[0].axial, *ax1 = e->out->chair[1].axial;
+  guint             mask[2] = { 0, 0 };
+  PairStep          steps[3 * CW_MAX_SUBS * (CW_MAX_SUBS - 1) / 2 + 3];
+  int               n = 0;
 
+  /* axial groups, each chair's in group order */
+  for (int i = 0; i < mol->n_subs; i++)
+    {
+      mask[0] |= (guint) !!ax0[i] << i;
+      mask[1] |= (guint) !!ax1[i] << i;
+    }
   for (int chair = 0; chair < 2; chair++)
-    for (int i = 0; i < mol->n_subs; i++)
-      if (e->out->chair[chair].axial[i])
-        add_axial_term (e, chair, i);
+    for (guint m = mask[chair]; m != 0; m &= m - 1)
+      add_axial_term (e, chair, g_bit_nth_lsf (m, -1));
+  /* the pairs: first listed (each step written, kept only when it applies), then made in the
+   * same order as ever, so every chair's terms and the parameters come in that order */
   for (int i = 0; i < mol->n_subs; i++)
     for (int j = i + 1; j < mol->n_subs; j++)
       {
-        int                d = ring_distance (mol->subs[i].position, mol->subs[j].position);
-        int                k0 = pair_kind[d][!!ax0[i]][!!ax0[j]], k1 = pair_kind[d][!!ax1[i]][!!ax1[j]];
-        const CwPairEntry *geminal = NULL;
+        int d = ring_distance (mol->subs[i].position, mol->subs[j].position);
+        int k0 = pair_kind[d][!!ax0[i]][!!ax0[j]], k1 = pair_kind[d][!!ax1[i]][!!ax1[j]];
+        int flag = note_pair_flag (e, i, j, d);
 
-        if (k0 >= 0)
-          add_pair_term (e, 0, k0, i, j);
-        if (k1 >= 0)
-          add_pair_term (e, 1, k1, i, j);
-        if (d == 0)
-          geminal = add_geminal_term (e, i, j);
-        note_pair_flag (e, i, j, d, geminal);
+        steps[n] = (PairStep) { i, j, 0, k0, -1 };
+        n += k0 >= 0;
+        steps[n] = (PairStep) { i, j, 1, k1, -1 };
+        n += k1 >= 0;
+        steps[n] = (PairStep) { i, j, GEMINAL_STEP, 0, flag };
+        n += d == 0;
       }
+  for (int k = 0; k < n; k++)
+    {
+      const PairStep *st = &steps[k];
+      if (st->what != GEMINAL_STEP)
+        add_pair_term (e, st->what, st->kind, st->i, st->j);
+      else if (add_geminal_term (e, st->i, st->j) != NULL && st->flag >= 0)
+        e->pair_flags[st->flag].code = CW_N_FLAGS; /* tabulated: the pair is additive after all */
+    }
 }
 
 /* Per ring position, the (group, axial) labels of a chair in a canonical order. */
@@ -422,7 +451,8 @@ build_flags (CwEngine *e, CwFlagCode symmetry)
   if (better >= an->twist_boat - ring->twist_boat_margin)
     add_flag (an, CW_FLAG_TWIST_BOAT, -1, -1, an->twist_boat);
   for (int k = 0; k < e->n_pair_flags; k++)
-    add_flag (an, e->pair_flags[k].code, e->pair_flags[k].sub_a, e->pair_flags[k].sub_b, 0);
+    if (e->pair_flags[k].code != CW_N_FLAGS)
+      add_flag (an, e->pair_flags[k].code, e->pair_flags[k].sub_a, e->pair_flags[k].sub_b, 0);
   if (e->any_estimate)
     add_flag (an, CW_FLAG_ESTIMATED_TERM, e->estimate_a, e->estimate_b, e->n_estimated_pairs);
   if (constant >= 0)
