@@ -316,7 +316,7 @@ build_terms (CwEngine *e)
     }
   for (int chair = 0; chair < 2; chair++)
     for (guint m = mask[chair]; m != 0; m &= m - 1)
-      add_axial_term (e, chair, g_bit_nth_lsf (m, -1));
+      add_axial_term (e, chair, __builtin_ctz (m)); /* the lowest set bit (GLib's g_bit_nth_lsf loops) */
   /* the pairs: first listed (each step written, kept only when it applies), then made in the
    * same order as ever, so every chair's terms and the parameters come in that order */
   for (int i = 0; i < mol->n_subs; i++)

@@ -237,10 +237,10 @@ cw_molecule_append_configuration (const CwMolecule *mol, GString *out)
   n = __builtin_popcount (stereo);
   if (n < 2)
     return;
-  ref = g_bit_nth_lsf (stereo, -1);
+  ref = __builtin_ctz (stereo);
   if (n == 2)
     {
-      cw_str_puts (out, faces[g_bit_nth_lsf (stereo, ref)] == faces[ref] ? "cis" : "trans");
+      cw_str_puts (out, faces[__builtin_ctz (stereo & (stereo - 1))] == faces[ref] ? "cis" : "trans");
       return;
     }
   /* no printf: batch runs call this once a compound; every carbon after the reference is
