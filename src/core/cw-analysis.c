@@ -22,6 +22,7 @@ typedef struct
 
 #define CW_MAX_PARAMS 96
 #define CW_PARAM_SLOTS 128 /* open-addressing table, a power of two above CW_MAX_PARAMS */
+G_STATIC_ASSERT (CW_MAX_PARAMS < 255); /* slots hold index + 1 in a byte */
 
 typedef struct
 {
@@ -34,7 +35,7 @@ typedef struct
   gboolean a_thermo[CW_MAX_SUBS];
   CwParam params[CW_MAX_PARAMS];
   int n_params;
-  gint16 slots[CW_PARAM_SLOTS]; /* param index + 1, 0 for empty */
+  guint8 slots[CW_PARAM_SLOTS]; /* param index + 1, 0 for empty */
   gboolean any_estimate;
   int estimate_a, estimate_b;
   guint64 estimated_pairs[(CW_MAX_SUBS * CW_MAX_SUBS + 63) / 64]; /* bit a * CW_MAX_SUBS + b, a < b */
@@ -65,7 +66,7 @@ add_param (CwEngine *e, int chair, int tag, const void *p1, const void *p2, doub
   if (i < 0)
     {
       i = e->n_params;
-      e->slots[h] = (gint16) (i + 1);
+      e->slots[h] = (guint8) (i + 1);
       /* 12 A-values, 24 vicinal and 24 1,3 pairs and 6 geminal ones stay inside the table. */
       g_assert (e->n_params < CW_MAX_PARAMS);
       e->params[i] = (CwParam) { tag, p1, p2, sigma, { 0, 0 } };

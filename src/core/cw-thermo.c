@@ -16,19 +16,12 @@ cw_populations (double dg_kcal, double t_kelvin, double *x1, double *x2)
    * exp() at or below 1, so nothing overflows and x1 + x2 = 1 to rounding. */
   double u = dg_kcal / (CW_R_KCAL * t_kelvin);
   double e = exp (-fabs (u));
-  double small = e / (1.0 + e);
-  double large = 1.0 / (1.0 + e);
+  double both[2] = { e / (1.0 + e), 1.0 / (1.0 + e) }; /* small, large */
+  int    up = u >= 0;
 
-  if (u >= 0)
-    {
-      *x1 = large;
-      *x2 = small;
-    }
-  else
-    {
-      *x1 = small;
-      *x2 = large;
-    }
+  /* picked by index, not by a branch: the sign of u is anyone's guess in a batch */
+  *x1 = both[up];
+  *x2 = both[!up];
 }
 
 double
