@@ -152,6 +152,26 @@ test_additivity_flags (void)
   g_assert_true (cw_analysis_has_flag (&an, CW_FLAG_HBOND_1_3));
   test_analyze (data, "1u=isopropyl 1d=methyl", 298.15, &an);
   g_assert_true (cw_analysis_has_flag (&an, CW_FLAG_GEMINAL_NONADDITIVE));
+  /* a geminal pair with an aryl group but a tabulated correction (methyl/phenyl in
+   * data/interactions.json) is additive by the model: no flag, in either order of the groups */
+  test_analyze (data, "1u=phenyl 1d=methyl", 298.15, &an);
+  g_assert_false (cw_analysis_has_flag (&an, CW_FLAG_GEMINAL_NONADDITIVE));
+  {
+    /* with both kinds of geminal pair, only the untabulated one (on C4) is flagged */
+    g_autoptr (CwMolecule) mol = test_ring (data, "1u=methyl 1d=phenyl 4u=isopropyl 4d=methyl");
+    CwConditions cond = { 298.15, CW_SOLVENT_APROTIC };
+    int          n = 0;
+
+    g_assert_true (cw_analyze (data, mol, &cond, &an, NULL));
+    for (int k = 0; k < an.n_flags; k++)
+      if (an.flags[k].code == CW_FLAG_GEMINAL_NONADDITIVE)
+        {
+          g_assert_cmpint (mol->subs[an.flags[k].sub_a].position, ==, 4);
+          g_assert_cmpint (mol->subs[an.flags[k].sub_b].position, ==, 4);
+          n++;
+        }
+    g_assert_cmpint (n, ==, 1);
+  }
   test_analyze (data, "1u=chloro 3u=bromo", 298.15, &an);
   g_assert_true (cw_analysis_has_flag (&an, CW_FLAG_ESTIMATED_TERM));
   /* the message counts the estimated pairs: data/interactions.json has no term for at least two
