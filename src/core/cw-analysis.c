@@ -41,6 +41,8 @@ typedef struct
   guint64 estimated_pairs[(CW_MAX_SUBS * CW_MAX_SUBS + 63) / 64]; /* bit a * CW_MAX_SUBS + b, a < b */
   int n_estimated_pairs;
   double energy[2]; /* each chair's terms summed as they are made, in their order */
+  gboolean record_terms; /* FALSE: terms are summed only, each written over one scratch term */
+  CwTerm scratch;
   int first_constant, first_solvent, first_custom; /* substituents for the flags, or -1 */
   CwFlag pair_flags[CW_MAX_SUBS * (CW_MAX_SUBS - 1) / 2]; /* one per pair at most: found with the pair terms, added in build_flags */
   int n_pair_flags;
@@ -121,6 +123,8 @@ new_term (CwEngine *e, int chair, CwTermKind kind, int a, int b)
   CwChair *c = &e->out->chair[chair];
   CwTerm *t;
 
+  if (!e->record_terms)
+    return &e->scratch;
   g_assert (c->n_terms < CW_MAX_TERMS);
   t = &c->terms[c->n_terms++];
   memset (t, 0, sizeof *t);
@@ -562,6 +566,7 @@ analyze (const CwData *data, const CwMolecule *mol, const CwConditions *cond, gb
   memset (e.estimated_pairs, 0, sizeof e.estimated_pairs);
   e.n_estimated_pairs = 0;
   e.energy[0] = e.energy[1] = 0;
+  e.record_terms = kinetics;
   e.first_constant = e.first_solvent = e.first_custom = -1;
   e.n_pair_flags = 0;
   out->temperature = cond->temperature;

@@ -101,8 +101,9 @@ gboolean    cw_analyze (const CwData *data,
                         const CwConditions *cond,
                         CwAnalysis *out,
                         GError **error);
-/* The same without the ring-inversion rate constants (k_forward and k_reverse are NAN): what a
- * batch of compounds needs. */
+/* The same without the ring-inversion rate constants (k_forward and k_reverse are NAN) and
+ * without the itemised terms (each chair's n_terms is 0; its energy is set): what a batch of
+ * compounds needs. */
 gboolean    cw_analyze_equilibrium (const CwData *data,
                                     const CwMolecule *mol,
                                     const CwConditions *cond,

@@ -298,6 +298,9 @@ test_equilibrium_only (void)
       for (int k = 0; k < full.n_flags; k++)
         g_assert_cmpint (full.flags[k].code, ==, eq.flags[k].code);
       g_assert_true (isnan (eq.k_forward) && isnan (eq.k_reverse));
+      g_assert_cmpfloat (full.chair[0].energy, ==, eq.chair[0].energy);
+      g_assert_cmpfloat (full.chair[1].energy, ==, eq.chair[1].energy);
+      g_assert_cmpint (eq.chair[0].n_terms + eq.chair[1].n_terms, ==, 0);
       g_assert_cmpfloat (full.k_forward, >, 0);
     }
   {
