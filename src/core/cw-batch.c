@@ -634,14 +634,21 @@ process_line (Batch *b, char *line, gsize len)
            * bytes a step while none of them is at or below the space. */
           while (i + 8 <= len)
             {
-              guint64 w;
+              guint64 w, low;
               memcpy (&w, line + i, 8);
-              if (((w - 0x2121212121212121ull) & ~w & 0x8080808080808080ull) != 0)
-                break;
+              w = GUINT64_FROM_LE (w);
+              low = (w - 0x2121212121212121ull) & ~w & 0x8080808080808080ull;
+              if (low != 0)
+                {
+                  /* the lowest flagged byte is exact (higher ones may be borrows) */
+                  i += __builtin_ctzll (low) / 8;
+                  goto found;
+                }
               i += 8;
             }
           while (i < len && (guchar) line[i] > ' ')
             i++;
+        found:
           if (i < len && !g_ascii_isspace (line[i]))
             {
               i++;
