@@ -540,38 +540,47 @@ read_faces (Reading *r)
 static void
 fill_molecule (const Reading *r, guint open_bits, const int *open_ring, int n_open, CwMolecule *m)
 {
-  m->n_subs = 0;
+  int   first[CW_RING_SIZE] = { 0 }, second[CW_RING_SIZE] = { 0 }, count[CW_RING_SIZE] = { 0 }, n = 0;
+  guint flips = 0; /* bit i: the open carbon at ring index i takes its faces the other way */
+
   m->custom_groups = NULL;
+  if (r->n_subs == 0)
+    {
+      m->n_subs = 0;
+      return;
+    }
+  for (int k = 0; k < n_open; k++)
+    flips |= ((open_bits >> k) & 1u) << open_ring[k];
+  /* each carbon's groups in the order read (a ring carbon has at most two) */
+  for (int s = 0; s < r->n_subs; s++)
+    {
+      int i = r->sub_ring[s];
+      first[i] = count[i] ? first[i] : s;
+      second[i] = count[i] ? s : second[i];
+      count[i]++;
+    }
+  /* written without branching on the data: both slots of every carbon are stored (the up
+   * face first) and only those that hold a group move the count on. An unwritten face is up
+   * for the first group and down for the second, the other way round where the open carbon is
+   * flipped. */
   for (int i = 0; i < CW_RING_SIZE; i++)
     {
-      int subs[2], n = 0, flip = 0;
-      for (int s = 0; s < r->n_subs; s++)
-        if (r->sub_ring[s] == i)
-          subs[n++] = s;
-      for (int k = 0; k < n_open; k++)
-        if (open_ring[k] == i)
-          flip = (open_bits >> k) & 1;
-      for (int k = 0; k < n; k++)
+      int up0 = (int) ((flips >> i) & 1u) ? CW_FACE_DOWN : CW_FACE_UP, up1 = up0 == CW_FACE_UP ? CW_FACE_DOWN : CW_FACE_UP;
+      int f0 = r->sub_face[first[i]], f1 = r->sub_face[second[i]];
+      int s0 = first[i], s1 = second[i], swap;
+      f0 = f0 >= 0 ? f0 : up0;
+      f1 = f1 >= 0 ? f1 : up1;
+      swap = (count[i] == 2) & (f0 > f1);
+      for (int k = 0; k < 2; k++)
         {
-          int f = r->sub_face[subs[k]];
-          if (f < 0)
-            f = (k == 0) != (flip != 0) ? CW_FACE_UP : CW_FACE_DOWN;
-          m->subs[m->n_subs].group = r->sub_group[subs[k]];
-          m->subs[m->n_subs].position = i + 1;
-          m->subs[m->n_subs].face = f;
-          m->n_subs++;
+          int slot = MIN (n, CW_MAX_SUBS - 1), which = k ^ swap;
+          m->subs[slot].group = r->sub_group[which ? s1 : s0];
+          m->subs[slot].position = i + 1;
+          m->subs[slot].face = which ? f1 : f0;
+          n += k < count[i];
         }
     }
-  /* keep (position, face) order */
-  for (int a = 1; a < m->n_subs; a++)
-    for (int b = a; b > 0 && m->subs[b - 1].position == m->subs[b].position &&
-                    m->subs[b - 1].face > m->subs[b].face;
-         b--)
-      {
-        CwSubstituent t = m->subs[b - 1];
-        m->subs[b - 1] = m->subs[b];
-        m->subs[b] = t;
-      }
+  m->n_subs = n;
 }
 
 int
@@ -587,14 +596,19 @@ cw_sm_make_molecules (Reading *r, CwMolecule *out, int max_out, CwSmilesInfo *in
   n_rel = cw_sm_relevant_carbons (&base, relevant);
   info->n_open = 0;
   if (n_rel >= 2)
-    for (int i = 0; i < CW_RING_SIZE; i++)
+    {
+      /* the open stereocentres: relevant carbons with a group whose face was not written, in
+       * ring order */
+      guint open_mask = 0;
       for (int s = 0; s < r->n_subs; s++)
-        if (r->sub_ring[s] == i && relevant[i + 1] && r->sub_face[s] < 0)
-          {
-            info->open_pos[n_open] = r->g->atoms[r->ring[i]].pos;
-            open_ring[n_open++] = i;
-            break;
-          }
+        open_mask |= (guint) (relevant[r->sub_ring[s] + 1] && r->sub_face[s] < 0) << r->sub_ring[s];
+      for (; open_mask != 0; open_mask &= open_mask - 1)
+        {
+          int i = __builtin_ctz (open_mask);
+          info->open_pos[n_open] = r->g->atoms[r->ring[i]].pos;
+          open_ring[n_open++] = i;
+        }
+    }
   info->n_open = n_open;
   all_open = n_open == n_rel;
   for (guint bits = 0; bits < (1u << n_open); bits++)
