@@ -354,6 +354,62 @@ cached_group (const CwSmIndex *index, CwSmGraph *g, const char *s, int lo, int h
   return group;
 }
 
+/* The neighbour order @/@@ refers to on a marked ring carbon (previous ring carbon 0, next 1,
+ * first group 2, second group or H 3), two bits a neighbour in the order the bonds are
+ * written: the bond to the atom before, the H, the ring bond, the branches, the atom after. By
+ * place (0 the first ring carbon, 1 the middle ones, 2 the last), whether the chain before the
+ * ring (first carbon) or after it (last carbon) attaches there, an H in its brackets and its
+ * number of branches. */
+typedef struct
+{
+  guint8 code, n;
+} StereoOrder;
+
+static StereoOrder stereo_orders[3][2][2][3];
+
+static StereoOrder
+stereo_order (int place, gboolean attached, gboolean h, int n_branch)
+{
+  gboolean    first = place == 0, last = place == 2;
+  gboolean    prefix = first && attached, tail = last && attached;
+  StereoOrder o = { 0, 0 };
+#define PUT(sym) (o.n < 4 ? (o.code |= (guint8) ((sym) << (2 * o.n))) : 0, o.n++)
+  if (!first)
+    PUT (0);
+  else if (prefix)
+    PUT (2);
+  if (h)
+    PUT (3);
+  if (first)
+    PUT (0);
+  else if (last)
+    PUT (1);
+  for (int b = 0; b < n_branch; b++)
+    PUT (prefix || b > 0 ? 3 : 2);
+  if (!last)
+    PUT (1);
+  else if (tail)
+    PUT (n_branch > 0 ? 3 : 2);
+#undef PUT
+  return o;
+}
+
+static void
+init_stereo_orders (void)
+{
+  static gsize done = 0;
+
+  if (g_once_init_enter (&done))
+    {
+      for (int place = 0; place < 3; place++)
+        for (int attached = 0; attached < 2; attached++)
+          for (int h = 0; h < 2; h++)
+            for (int nb = 0; nb < 3; nb++)
+              stereo_orders[place][attached][h][nb] = stereo_order (place, attached, h, nb);
+      g_once_init_leave (&done, 1);
+    }
+}
+
 /* The molecule when no ring stereocentre is left open, as cw_sm_make_molecules makes it: the
  * groups in (position, face) order, an unwritten face up for the first group of a carbon and
  * down for the second, then the canonical numbering (mirror images counted as one when fewer
@@ -462,75 +518,71 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
     r->inner_stereo = n_at > 0;
   }
 
-  for (int k = 0; k < CW_RING_SIZE; k++)
-    {
-      const ChainAtom *a = &sc.chain[first + k];
-      int              degree = 2 + a->n_branch + (k == 0 && prefix) + (k == 5 && tail), s0 = r->n_subs;
-      int              n_here;
-      gboolean         clockwise;
-
-      if ((degree > 4) | ((a->kind == RING_BRACKET) & (degree + a->hcount != 4)))
-        return 0;
-      r->ring[k] = k;
-      g->atoms[k].pos = a->pos;
-      g->atoms[k].len = a->len;
-      /* substituents in the order their bonds were written */
-      if (k == 0 && prefix)
-        {
-          const ChainAtom *root = &sc.chain[first - 1];
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[0].pos, a->pos, root->pos - sc.chain[0].pos, &cyclohexyl);
-          r->sub_ring[r->n_subs++] = k;
-        }
-      for (int b = a->first_branch; b < a->first_branch + a->n_branch; b++)
-        {
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0, &cyclohexyl);
-          r->sub_ring[r->n_subs++] = k;
-        }
-      if (k == 5 && tail)
-        {
-          r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[first + 6].pos, len, 0, &cyclohexyl);
-          r->sub_ring[r->n_subs++] = k;
-        }
-      n_here = r->n_subs - s0;
-      for (int s = s0; s < r->n_subs; s++)
-        {
-          r->sub_face[s] = -1;
-          if (r->sub_group[s] == NULL)
-            return 0;
-        }
-      if (n_here == 0 || a->chirality == CW_SM_CHIRAL_NONE)
-        continue;
-      /* the neighbour order @/@@ refers to (previous ring carbon 0, next 1, first group 2,
-       * second group or H 3): the bond to the atom before, the H, the ring bond, the
-       * branches, the atom after; two bits a neighbour */
+  /* the groups in the order their bonds were written: the chain before the ring (on C1), the
+   * ring carbons' branches (branches of chain atoms outside the ring lie inside the chains'
+   * texts), the chain after the ring (on C6) */
+  {
+    gboolean missing = FALSE;
+    if (prefix)
       {
-        guint code = 0, nw = 0, parity;
-#define PUT(sym) (code |= (guint) (sym) << (2 * nw), nw++)
-        if (k > 0)
-          PUT (0);
-        else if (prefix)
-          PUT (2);
-        if (a->hcount > 0)
-          PUT (3);
-        if (k == 0)
-          PUT (0);
-        else if (k == 5)
-          PUT (1);
-        for (int b = 0; b < a->n_branch; b++)
-          PUT ((k == 0 && prefix) || b > 0 ? 3 : 2);
-        if (k < 5)
-          PUT (1);
-        else if (tail)
-          PUT (a->n_branch > 0 ? 3 : 2);
-#undef PUT
-        if (nw != 4 || (parity = cw_sm_permutation_parity[code & 0xff]) == 0)
+        const ChainAtom *root = &sc.chain[first - 1];
+        r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[0].pos, sc.chain[first].pos, root->pos - sc.chain[0].pos, &cyclohexyl);
+        r->sub_ring[r->n_subs++] = 0;
+      }
+    for (int b = 0; b < sc.n_branch; b++)
+      {
+        guint k = (guint) (sc.br_owner[b] - first);
+        if (k >= CW_RING_SIZE)
+          continue;
+        r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0, &cyclohexyl);
+        r->sub_ring[r->n_subs++] = k;
+      }
+    if (tail)
+      {
+        r->sub_group[r->n_subs] = cached_group (index, g, text, sc.chain[first + 6].pos, len, 0, &cyclohexyl);
+        r->sub_ring[r->n_subs++] = CW_RING_SIZE - 1;
+      }
+    for (int s = 0; s < r->n_subs; s++)
+      {
+        r->sub_face[s] = -1;
+        missing |= r->sub_group[s] == NULL;
+      }
+    if (missing)
+      return 0;
+  }
+  {
+    int      s0 = 0;
+    gboolean bad = FALSE;
+    init_stereo_orders ();
+    for (int k = 0; k < CW_RING_SIZE; k++)
+      {
+        const ChainAtom *a = &sc.chain[first + k];
+        int              attached = (k == 0 && prefix) || (k == CW_RING_SIZE - 1 && tail);
+        int              degree = 2 + a->n_branch + attached, n_here = a->n_branch + attached;
+        int              place = k == 0 ? 0 : k == CW_RING_SIZE - 1 ? 2 : 1;
+        guint            parity;
+        gboolean         clockwise;
+        StereoOrder      o;
+
+        bad |= (degree > 4) | ((a->kind == RING_BRACKET) & (degree + a->hcount != 4));
+        r->ring[k] = k;
+        g->atoms[k].pos = a->pos;
+        g->atoms[k].len = a->len;
+        s0 += n_here;
+        if (n_here == 0 || a->chirality == CW_SM_CHIRAL_NONE || degree > 4)
+          continue;
+        /* the neighbour order @/@@ refers to, from the table (see stereo_order) */
+        o = stereo_orders[place][attached][a->hcount > 0][a->n_branch];
+        if (o.n != 4 || (parity = cw_sm_permutation_parity[o.code]) == 0)
           continue;
         clockwise = (a->chirality == CW_SM_CHIRAL_CLOCKWISE) == (parity == 2);
-        r->sub_face[s0] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
+        r->sub_face[s0 - n_here] = clockwise ? CW_FACE_DOWN : CW_FACE_UP;
         if (n_here == 2)
-          r->sub_face[s0 + 1] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
+          r->sub_face[s0 - n_here + 1] = clockwise ? CW_FACE_UP : CW_FACE_DOWN;
       }
-    }
+    if (bad)
+      return 0;
+  }
   /* a cyclohexyl group's ring is a second candidate ring with one substituent: ours is the
    * one analysed when it has more than one; with one, the general reader takes the first of the
    * two equal rings (the same molecule either way) and says so in the notes */
