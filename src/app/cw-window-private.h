@@ -59,9 +59,9 @@ struct _CwWindow
   GtkWidget    *pending_dialog; /* the unsaved-changes or restore dialog, when shown */
   char         *autosave_path;
   char         *analysis_error;
-  CwCouplings  *couplings; /* 11 kB: kept on the heap, reused */
+  CwCouplings  *couplings;  /* 11 kB: kept on the heap, reused */
   CwReactivity *reactivity; /* valid when reactivity_valid */
-  CwIsomerSet  *isomers; /* what the isomers page shows, NULL until it is shown */
+  CwIsomerSet  *isomers;    /* what the isomers page shows, NULL until it is shown */
 
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
    * what an edit would otherwise spend most of its time on) */
@@ -123,10 +123,10 @@ void      cw_window_class_add_page_actions (GtkWidgetClass *widget_class);
 CwWindow *cw_window_open_isomer (CwWindow *self,
                                  int       index,
                                  GError  **error);
-void cw_window_grid_set_rows (GtkGrid     *grid,
-                              guint        n_columns,
-                              const char **cells,
-                              guint        n_rows);
+void      cw_window_grid_set_rows (GtkGrid     *grid,
+                                   guint        n_columns,
+                                   const char **cells,
+                                   guint        n_rows);
 
 /* cw-window-smiles.c: the SMILES entry, copy and paste. */
 void     cw_window_class_add_smiles_actions (GtkWidgetClass *widget_class);
