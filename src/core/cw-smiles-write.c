@@ -33,14 +33,12 @@ even_permutation (const int w[4])
 static const char tokens[5][8] = { "C", "[C@H]", "[C@@H]", "[C@]", "[C@@]" };
 static const guint8 token_len[5] = { 1, 5, 6, 4, 5 };
 
-static inline int
-ring_token (gboolean marked, int n_groups, const int w[4])
+/* The token of a marked carbon with n_groups groups and neighbour order w. */
+static int
+marked_token_of (int n_groups, const int w[4])
 {
-  gboolean clockwise;
+  gboolean clockwise = even_permutation (w);
 
-  if (!marked)
-    return 0;
-  clockwise = even_permutation (w);
   if (n_groups == 1)
     return clockwise ? 1 : 2;
   return clockwise ? 3 : 4;
@@ -97,7 +95,7 @@ init_marked_tokens (void)
             {
               int w[4];
               neighbour_order (place, n, face == 0 ? UP : DOWN, w);
-              marked_token[place][n][face] = ring_token (TRUE, n, w);
+              marked_token[place][n][face] = marked_token_of (n, w);
             }
       g_once_init_leave (&done, 1);
     }
@@ -195,14 +193,6 @@ put_token (Ctx *c, int token)
   c->p += token_len[token];
 }
 
-static inline void
-put_branch (Ctx *c, const GroupText *t)
-{
-  put_c (c, '(');
-  put (c, t->fwd, t->fwd_len);
-  put_c (c, ')');
-}
-
 /* C1: its first group written towards the ring when it can be, then the ring carbon and ring
  * bond 1; otherwise the ring carbon first, its implicit H (if any) first in its neighbour
  * order, then ring bond 1, then the groups. */
@@ -218,15 +208,13 @@ write_c1 (Ctx *c, const GroupText *slot[2], gboolean marked)
       put (c, first->rev, first->rev_len);
       put_token (c, carbon_token (marked, AT_C1_AFTER_GROUP, n, face));
       put_c (c, '1');
-      if (n == 2)
-        put_branch (c, slot[1]);
+      put_branch_if (c, n == 2 ? slot[1] : &empty_text);
       return;
     }
   put_token (c, carbon_token (marked, AT_C1_FIRST, n, face));
   put_c (c, '1');
-  for (int k = 0; k < 2; k++)
-    if (slot[k] != NULL)
-      put_branch (c, slot[k]);
+  put_branch_if (c, slot[0] ? slot[0] : &empty_text);
+  put_branch_if (c, slot[1] ? slot[1] : &empty_text);
 }
 
 /* C2…C5: the carbon, then its groups as branches. */
