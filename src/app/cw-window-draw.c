@@ -81,16 +81,15 @@ figure_slot (CwFigure fig)
     }
 }
 
-/* The figure as it would be drawn now into the area's box; NULL when nothing is drawn. */
+/* The figure as it would be drawn now into the area's box with the options opt (see
+ * cw_window_render_options); NULL when nothing is drawn. */
 static CwScene *
-figure_scene (CwWindow        *self,
-              GtkDrawingArea  *area,
-              CwFigure         fig,
-              int              width,
-              int              height,
-              CwRenderOptions *opt)
+figure_scene (CwWindow              *self,
+              CwFigure               fig,
+              int                    width,
+              int                    height,
+              const CwRenderOptions *opt)
 {
-  cw_window_render_options (self, GTK_WIDGET (area), opt);
   if (!self->an_valid && fig != CW_FIGURE_STRUCTURE)
     return NULL;
   return cw_render_figure_scene (fig, self->data, cw_document_peek_molecule (self->doc),
@@ -118,7 +117,7 @@ draw_figure (CwWindow       *self,
   else
     {
       g_clear_pointer (&self->figure_pending[slot], cw_scene_free);
-      scene = figure_scene (self, area, fig, width, height, &opt);
+      scene = figure_scene (self, fig, width, height, &opt);
     }
   cw_render_figure_paint (cr, scene, opt.dark, width, height);
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
@@ -170,7 +169,8 @@ cw_window_queue_figures (CwWindow *self)
           gtk_widget_queue_draw (GTK_WIDGET (area));
           continue;
         }
-      scene = figure_scene (self, area, figs[i], width, height, &opt);
+      cw_window_render_options (self, GTK_WIDGET (area), &opt);
+      scene = figure_scene (self, figs[i], width, height, &opt);
       if (opt.dark == self->figure_drawn_dark[slot] &&
           cw_scene_equal_within (scene, self->figure_drawn[slot], figure_tolerance (area, scene, width, height)))
         {
