@@ -96,6 +96,7 @@ struct _CwWindow
   guint         next_serial;
   guint         autosave_id;
   gulong        first_frame_id; /* after-paint handler that sets the window icon */
+  gboolean      frame_sync;     /* X11: frame sync with the window manager is on */
   guint         n_custom_shown; /* custom groups in groups_store */
   gboolean      updating_temperature;
   gboolean      close_confirmed;
@@ -108,6 +109,7 @@ void              cw_window_begin_edit (CwWindow   *self,
 void              cw_window_end_edit (CwWindow *self);
 void              cw_window_refresh (CwWindow *self);
 void              cw_window_update_title (CwWindow *self);
+void              cw_window_update_frame_sync (CwWindow *self);
 void              cw_window_show_error (CwWindow     *self,
                                         const char   *primary,
                                         const GError *error);

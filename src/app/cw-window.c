@@ -3,6 +3,9 @@
 #include "cw-window.h"
 
 #include <glib/gi18n.h>
+#ifdef GDK_WINDOWING_X11
+#include <gdk/x11/gdkx.h>
+#endif
 
 #include "cw-app-data.h"
 #include "cw-group-item.h"
@@ -356,6 +359,27 @@ first_frame_cb (GdkFrameClock *clock,
   g_idle_add_full (G_PRIORITY_LOW + 10, set_icon_idle_cb, g_object_ref (self), g_object_unref);
 }
 
+/* On X11, GDK asks the window manager at the end of every frame whether it supports
+ * frame sync (_NET_WM_FRAME_DRAWN). With a window manager the answer is cached; with none
+ * (a bare X server, a kiosk, Xvfb) GDK asks the X server again each time, two round trips
+ * a frame, about a fifth of a millisecond each, for an answer that stays no. The window
+ * turns frame sync off while no window manager offers it, which is what GDK does then
+ * anyway, and turns it back on when a window manager that does appears. */
+void
+cw_window_update_frame_sync (CwWindow *self)
+{
+#ifdef GDK_WINDOWING_X11
+  GdkDisplay *display = gtk_widget_get_display (GTK_WIDGET (self));
+  GdkSurface *surface = gtk_native_get_surface (GTK_NATIVE (self));
+
+  if (surface == NULL || !GDK_IS_X11_DISPLAY (display))
+    return;
+  self->frame_sync = gdk_x11_screen_supports_net_wm_hint (gdk_x11_display_get_screen (display),
+                                                          g_intern_static_string ("_NET_WM_FRAME_DRAWN"));
+  gdk_x11_surface_set_frame_sync_enabled (surface, self->frame_sync);
+#endif
+}
+
 static void
 cw_window_realize (GtkWidget *widget)
 {
@@ -364,6 +388,12 @@ cw_window_realize (GtkWidget *widget)
   if (!self->refreshed)
     cw_window_refresh (self);
   GTK_WIDGET_CLASS (cw_window_parent_class)->realize (widget);
+  cw_window_update_frame_sync (self);
+#ifdef GDK_WINDOWING_X11
+  if (GDK_IS_X11_DISPLAY (gtk_widget_get_display (widget)))
+    g_signal_connect_object (gdk_x11_display_get_screen (gtk_widget_get_display (widget)), "window-manager-changed",
+                             G_CALLBACK (cw_window_update_frame_sync), self, G_CONNECT_SWAPPED);
+#endif
   /* The window's icon is set once its first frame is on screen: on X11 GTK renders the
    * icon at several sizes for the window manager when it is set, and the SVG renderer it
    * loads for that (with its XML and Unicode libraries) is about a twentieth of the time
@@ -380,6 +410,11 @@ cw_window_unrealize (GtkWidget *widget)
 
   if (self->first_frame_id != 0)
     g_clear_signal_handler (&self->first_frame_id, gtk_widget_get_frame_clock (widget));
+#ifdef GDK_WINDOWING_X11
+  if (GDK_IS_X11_DISPLAY (gtk_widget_get_display (widget)))
+    g_signal_handlers_disconnect_by_func (gdk_x11_display_get_screen (gtk_widget_get_display (widget)),
+                                          cw_window_update_frame_sync, self);
+#endif
   GTK_WIDGET_CLASS (cw_window_parent_class)->unrealize (widget);
 }
 
@@ -497,6 +532,7 @@ cw_window_init (CwWindow *self)
 
   gtk_widget_init_template (GTK_WIDGET (self));
 
+  self->frame_sync = TRUE; /* GDK's default */
   self->data = cw_app_get_data (&error);
   /* The tables are compiled into the program; failing here is a broken build. */
   if (self->data == NULL)

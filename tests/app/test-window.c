@@ -6,6 +6,9 @@
 #include "cw-application.h"
 #include "cw-custom-group-dialog.h"
 #include "app-test-window.h"
+#ifdef GDK_WINDOWING_X11
+#include <gdk/x11/gdkx.h>
+#endif
 
 /* Reference values, independent of the core:
  * - A(Me) from Booth & Everett, J. Chem. Soc., Perkin Trans. 2 1980, 255: axial -> equatorial
@@ -555,6 +558,30 @@ test_dark_style (void)
   destroy_window (win);
 }
 
+/* X11: frame sync follows the window manager's offer of it; under a bare X server (as in
+ * these tests) it is off, so that no frame asks the X server about it again. */
+static void
+test_frame_sync (void)
+{
+#ifdef GDK_WINDOWING_X11
+  CwWindow   *win = new_window ();
+  GdkDisplay *display = gtk_widget_get_display (GTK_WIDGET (win));
+
+  if (!GDK_IS_X11_DISPLAY (display))
+    {
+      destroy_window (win);
+      g_test_skip ("not an X11 display");
+      return;
+    }
+  g_assert_cmpint (win->frame_sync, ==,
+                   gdk_x11_screen_supports_net_wm_hint (gdk_x11_display_get_screen (display),
+                                                        g_intern_static_string ("_NET_WM_FRAME_DRAWN")));
+  destroy_window (win);
+#else
+  g_test_skip ("built without X11");
+#endif
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -562,6 +589,7 @@ main (int argc, char *argv[])
     return 0;
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/dark-style", test_dark_style);
+  g_test_add_func ("/app/window/frame-sync", test_frame_sync);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
