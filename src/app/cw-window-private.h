@@ -7,6 +7,7 @@
 #include "cw-reactivity.h"
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
+#include "cw-terms-table.h"
 #include "cw-window.h"
 
 G_BEGIN_DECLS
@@ -36,7 +37,7 @@ struct _CwWindow
   GtkLabel       *pop2_label;
   GtkLabel       *summary_label;
   GtkBox         *flags_box;
-  GtkGrid        *terms_grid;
+  CwTermsTable   *terms_table;
   GtkStack       *lower_stack;
   GtkLabel       *caution_label;
   GMenu          *recent_section;
@@ -65,7 +66,6 @@ struct _CwWindow
 
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
    * what an edit would otherwise spend most of its time on) */
-  GPtrArray *term_cells; /* GtkLabel*, 4 per grid row, row 0 the header */
   GPtrArray *flag_rows;  /* GtkGrid* holding a GtkImage and a GtkLabel */
 
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a

@@ -5,8 +5,6 @@
 
 #include "cw-window-private.h"
 
-#define N_COLUMNS 4
-
 /* Flags that explain rather than warn. */
 static gboolean
 flag_is_info (CwFlagCode code)
@@ -107,73 +105,6 @@ update_flags (CwWindow *self)
 
 /* ---- terms table -------------------------------------------------------------------- */
 
-static gboolean
-source_tooltip_cb (GtkWidget  *widget,
-                   int         x,
-                   int         y,
-                   gboolean    keyboard,
-                   GtkTooltip *tooltip,
-                   gpointer    user_data)
-{
-  const char *text = gtk_label_get_text (GTK_LABEL (widget));
-
-  if (text == NULL || *text == '\0')
-    return FALSE;
-  gtk_tooltip_set_text (tooltip, text);
-  return TRUE;
-}
-
-static GtkLabel *
-term_cell (CwWindow *self,
-           guint     row,
-           guint     col)
-{
-  while (self->term_cells->len < (row + 1) * N_COLUMNS)
-    {
-      guint      r = self->term_cells->len / N_COLUMNS, c = self->term_cells->len % N_COLUMNS;
-      GtkWidget *label = gtk_label_new (NULL);
-
-      gtk_label_set_xalign (GTK_LABEL (label), c == 1 || c == 2 ? 1.0f : 0.0f);
-      if (c == 1 || c == 2)
-        gtk_widget_add_css_class (label, "cw-terms-value");
-      if (c == 3)
-        {
-          gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
-          gtk_label_set_max_width_chars (GTK_LABEL (label), 48);
-          gtk_widget_set_hexpand (label, TRUE);
-          gtk_widget_add_css_class (label, "dim-label");
-        }
-      if (c == 3)
-        g_signal_connect (label, "query-tooltip", G_CALLBACK (source_tooltip_cb), NULL);
-      gtk_grid_attach (self->terms_grid, label, c, r, 1, 1);
-      g_ptr_array_add (self->term_cells, label);
-    }
-  return g_ptr_array_index (self->term_cells, row * N_COLUMNS + col);
-}
-
-static void
-set_row (CwWindow   *self,
-         guint       row,
-         const char *texts[N_COLUMNS],
-         gboolean    heading)
-{
-  for (guint c = 0; c < N_COLUMNS; c++)
-    {
-      GtkLabel *label = term_cell (self, row, c);
-
-      gtk_label_set_text (label, texts[c] ? texts[c] : "");
-      set_css_class (GTK_WIDGET (label), "cw-terms-header", heading);
-      if (c == 3)
-        {
-          /* The full source (the cell may be ellipsized), answered on demand in
-           * source_tooltip_cb: setting tooltip texts costs an X round trip each. */
-          set_css_class (GTK_WIDGET (label), "dim-label", !heading);
-          gtk_widget_set_has_tooltip (GTK_WIDGET (label), !heading);
-        }
-      gtk_widget_set_visible (GTK_WIDGET (label), TRUE);
-    }
-}
-
 static const CwTerm *
 find_term (const CwChair *chair,
            const CwTerm  *t)
@@ -188,62 +119,85 @@ find_term (const CwChair *chair,
   return NULL;
 }
 
+/* The rows' texts, kept until the table has taken them. */
+typedef struct
+{
+  GArray    *rows;  /* CwTermsTableRow */
+  GPtrArray *texts; /* char *, freed with the table */
+} TermRows;
+
+static void
+add_row (TermRows   *t,
+         gboolean    heading,
+         const char *c0,
+         const char *c1,
+         const char *c2,
+         const char *c3)
+{
+  CwTermsTableRow row = { { c0, c1, c2, c3 }, heading };
+
+  g_array_append_val (t->rows, row);
+}
+
+static const char *
+keep (TermRows *t,
+      char     *text)
+{
+  g_ptr_array_add (t->texts, text);
+  return text;
+}
+
 static void
 term_row (CwWindow     *self,
-          guint         row,
+          TermRows     *rows,
           const CwTerm *t1,
           const CwTerm *t2)
 {
-  const CwTerm    *t = t1 ? t1 : t2;
-  CwEnergyUnit     unit = cw_window_get_energy_unit (self);
-  g_autofree char *label = cw_term_dup_label (t, cw_document_peek_molecule (self->doc));
-  g_autofree char *e1 = t1 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t1->energy, unit)) : g_strdup ("–");
-  g_autofree char *e2 = t2 ? g_strdup_printf ("%.2f", cw_energy_from_kcal (t2->energy, unit)) : g_strdup ("–");
-  const char      *src = t->source ? t->source : "";
+  const CwTerm *t = t1 ? t1 : t2;
+  CwEnergyUnit  unit = cw_window_get_energy_unit (self);
+  const char   *src = t->source ? t->source : "";
+  const char   *label = keep (rows, cw_term_dup_label (t, cw_document_peek_molecule (self->doc)));
+  const char   *e1 = t1 ? keep (rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (t1->energy, unit))) : "–";
+  const char   *e2 = t2 ? keep (rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (t2->energy, unit))) : "–";
   /* Estimated terms say so; the table's own fall-back text may already begin with it. */
-  g_autofree char *source = t->estimated && g_ascii_strncasecmp (src, "estimate", 8) != 0
-    ? g_strdup_printf (_("estimate: %s"), src)
-    : g_strdup (src);
-  const char *texts[N_COLUMNS] = { label, e1, e2, source };
+  const char *source = t->estimated && g_ascii_strncasecmp (src, "estimate", 8) != 0
+    ? keep (rows, g_strdup_printf (_("estimate: %s"), src))
+    : src;
 
-  set_row (self, row, texts, FALSE);
+  add_row (rows, FALSE, label, e1, e2, source);
 }
 
 static void
 update_terms (CwWindow *self)
 {
-  CwEnergyUnit     unit = cw_window_get_energy_unit (self);
-  g_autofree char *h1 = NULL, *h2 = NULL, *tot1 = NULL, *tot2 = NULL;
-  guint            row = 1;
+  CwEnergyUnit unit = cw_window_get_energy_unit (self);
+  TermRows     rows = { g_array_new (FALSE, FALSE, sizeof (CwTermsTableRow)), g_ptr_array_new_with_free_func (g_free) };
 
   if (self->an_valid)
     {
       /* TRANSLATORS: column header: energy of a term in chair 1, with the unit */
-      h1 = g_strdup_printf (_("Chair 1 (%s)"), cw_energy_unit_symbol (unit));
-      h2 = g_strdup_printf (_("Chair 2 (%s)"), cw_energy_unit_symbol (unit));
-      set_row (self, 0, (const char *[N_COLUMNS]){ _("Term"), h1, h2, _("Source") }, TRUE);
-
+      add_row (&rows, TRUE, _("Term"), keep (&rows, g_strdup_printf (_("Chair 1 (%s)"), cw_energy_unit_symbol (unit))),
+               keep (&rows, g_strdup_printf (_("Chair 2 (%s)"), cw_energy_unit_symbol (unit))), _("Source"));
       for (int i = 0; i < self->an.chair[0].n_terms; i++)
         {
           const CwTerm *t = &self->an.chair[0].terms[i];
-          term_row (self, row++, t, find_term (&self->an.chair[1], t));
+          term_row (self, &rows, t, find_term (&self->an.chair[1], t));
         }
       for (int i = 0; i < self->an.chair[1].n_terms; i++)
         {
           const CwTerm *t = &self->an.chair[1].terms[i];
           if (find_term (&self->an.chair[0], t) == NULL)
-            term_row (self, row++, NULL, t);
+            term_row (self, &rows, NULL, t);
         }
-      if (row == 1)
-        set_row (self, row++, (const char *[N_COLUMNS]){ _("No axial groups"), "–", "–", "" }, FALSE);
-      tot1 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[0].energy, unit));
-      tot2 = g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[1].energy, unit));
-      set_row (self, row++, (const char *[N_COLUMNS]){ _("Total"), tot1, tot2, "" }, TRUE);
+      if (rows.rows->len == 1)
+        add_row (&rows, FALSE, _("No axial groups"), "–", "–", "");
+      add_row (&rows, TRUE, _("Total"),
+               keep (&rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[0].energy, unit))),
+               keep (&rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[1].energy, unit))), "");
     }
-  else
-    row = 0;
-  for (guint i = row * N_COLUMNS; i < self->term_cells->len; i++)
-    gtk_widget_set_visible (g_ptr_array_index (self->term_cells, i), FALSE);
+  cw_terms_table_set_rows (self->terms_table, (const CwTermsTableRow *) (void *) rows.rows->data, rows.rows->len);
+  g_array_unref (rows.rows);
+  g_ptr_array_unref (rows.texts);
 }
 
 /* ---- summary -------------------------------------------------------------------------- */

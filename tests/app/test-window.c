@@ -65,9 +65,18 @@ test_edit_updates_results (void)
   g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (win->pop2_label), "cw-major"));
   g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kcal/mol"));
   g_assert_true (cw_window_get_modified (win));
-  /* The terms table lists the axial methyl (header row + term + total = 3 rows, 4 columns). */
-  g_assert_nonnull (gtk_grid_get_child_at (win->terms_grid, 0, 2));
-  g_assert_nonnull (strstr (gtk_label_get_text (GTK_LABEL (gtk_grid_get_child_at (win->terms_grid, 3, 1))), "Booth"));
+  /* The terms table lists the axial methyl: heading, the term with A(T) in chair 1 and
+   * none in chair 2, its source, and the totals. */
+  g_assert_cmpuint (cw_terms_table_get_n_rows (win->terms_table), ==, 3);
+  {
+    g_autofree char *a = g_strdup_printf ("%.2f", methyl_a (t));
+
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 1), ==, a);
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 2), ==, "–");
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 2, 0), ==, "Total");
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 2, 1), ==, a);
+  }
+  g_assert_nonnull (strstr (cw_terms_table_get_cell (win->terms_table, 1, 3), "Booth"));
 
   /* kJ/mol: the same ΔG° times 4.184 shows in the result line. */
   g_settings_set_string (win->settings, "energy-unit", "kj");
@@ -75,6 +84,10 @@ test_edit_updates_results (void)
     g_autofree char *kj = g_strdup_printf ("%+.2f", -methyl_a (t) * 4.184);
     g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), kj));
     g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kJ/mol"));
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 0, 1), ==, "Chair 1 (kJ/mol)");
+    g_free (kj);
+    kj = g_strdup_printf ("%.2f", methyl_a (t) * 4.184);
+    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 1), ==, kj);
   }
   g_settings_set_string (win->settings, "energy-unit", "kcal");
 
@@ -558,6 +571,49 @@ test_dark_style (void)
   destroy_window (win);
 }
 
+/* The terms table redraws a change that keeps its size and lays itself out again only
+ * when its size changes; its text (copied with Ctrl+C) is tab-separated. */
+static void
+test_terms_table (void)
+{
+  GtkWidget            *window = gtk_window_new ();
+  CwTermsTable         *table = CW_TERMS_TABLE (cw_terms_table_new ());
+  const CwTermsTableRow two[] = { { { "Term", "Chair 1", "Chair 2", "Source" }, TRUE },
+                                  { { "1,3-diaxial", "0.87", "–", "a table" }, FALSE } };
+  const CwTermsTableRow other[] = { two[0], { { "1,3-diaxial", "0.12", "–", "a table" }, FALSE } };
+  const CwTermsTableRow three[] = { two[0], two[1], { { "Total", "0.87", NULL, NULL }, TRUE } };
+  GdkContentProvider   *content;
+  GValue                value = G_VALUE_INIT;
+
+  gtk_window_set_child (GTK_WINDOW (window), GTK_WIDGET (table));
+  gtk_window_present (GTK_WINDOW (window));
+  app_test_wait_mapped (window);
+  g_assert_cmpint (cw_terms_table_set_rows (table, two, 2), ==, CW_TERMS_TABLE_RESIZED);
+  g_assert_cmpint (cw_terms_table_set_rows (table, two, 2), ==, CW_TERMS_TABLE_UNCHANGED);
+  /* Tabular figures: another number of the same length keeps every column's width. */
+  g_assert_cmpint (cw_terms_table_set_rows (table, other, 2), ==, CW_TERMS_TABLE_REDRAWN);
+  g_assert_cmpint (cw_terms_table_set_rows (table, three, 3), ==, CW_TERMS_TABLE_RESIZED);
+  g_assert_cmpstr (cw_terms_table_get_cell (table, 2, 2), ==, "");
+  g_assert_null (cw_terms_table_get_cell (table, 3, 0));
+  g_assert_cmpstr (cw_terms_table_get_text (table), ==,
+                   "Term\tChair 1\tChair 2\tSource\n1,3-diaxial\t0.87\t–\ta table\nTotal\t0.87\t\t\n");
+  app_test_pump (5, NULL);
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (table)), >, 0);
+
+  gtk_widget_activate_action (GTK_WIDGET (table), "terms.copy", NULL);
+  content = gdk_clipboard_get_content (gtk_widget_get_clipboard (GTK_WIDGET (table)));
+  g_assert_nonnull (content);
+  g_value_init (&value, G_TYPE_STRING);
+  g_assert_true (gdk_content_provider_get_value (content, &value, NULL));
+  g_assert_cmpstr (g_value_get_string (&value), ==, cw_terms_table_get_text (table));
+  g_value_unset (&value);
+
+  g_assert_cmpint (cw_terms_table_set_rows (table, NULL, 0), ==, CW_TERMS_TABLE_RESIZED);
+  g_assert_cmpstr (cw_terms_table_get_text (table), ==, "");
+  gtk_window_destroy (GTK_WINDOW (window));
+  app_test_pump (5, NULL);
+}
+
 /* X11: frame sync follows the window manager's offer of it; under a bare X server (as in
  * these tests) it is off, so that no frame asks the X server about it again. */
 static void
@@ -590,6 +646,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/frame-sync", test_frame_sync);
+  g_test_add_func ("/app/window/terms-table", test_terms_table);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
