@@ -71,8 +71,8 @@ take_screenshot_cb (gpointer user_data)
       return G_SOURCE_REMOVE;
     }
   g_print (_("Screenshot saved to %s\n"), self->screenshot_path);
-  g_print ("%s\n%s\n%s\n", gtk_label_get_text (CW_WINDOW (win)->summary_label),
-           gtk_label_get_text (CW_WINDOW (win)->pop1_label), gtk_label_get_text (CW_WINDOW (win)->pop2_label));
+  g_print ("%s\n%s\n%s\n", cw_steady_label_get_text (CW_WINDOW (win)->summary_label),
+           cw_steady_label_get_text (CW_WINDOW (win)->pop1_label), cw_steady_label_get_text (CW_WINDOW (win)->pop2_label));
   g_print ("%s\n", cw_caution_text ());
   /* The window quits without asking: a screenshot never changes the document. */
   CW_WINDOW (win)->close_confirmed = TRUE;

@@ -4,6 +4,8 @@
 
 #include <glib/gi18n.h>
 
+#include "cw-copy-menu.h"
+
 #define N_COLS CW_TERMS_TABLE_COLUMNS
 #define SOURCE_COL (N_COLS - 1)
 #define COL_SPACING 18
@@ -371,32 +373,9 @@ menu_action (GtkWidget  *widget,
              const char *action_name,
              GVariant   *parameter)
 {
-  CwTermsTable *self = CW_TERMS_TABLE (widget);
+  graphene_point_t at;
 
-  if (self->menu == NULL)
-    {
-      g_autoptr (GMenu) model = g_menu_new ();
-
-      g_menu_append (model, _("_Copy Table"), "terms.copy");
-      self->menu = gtk_popover_menu_new_from_model (G_MENU_MODEL (model));
-      gtk_widget_set_parent (self->menu, widget);
-      gtk_popover_set_has_arrow (GTK_POPOVER (self->menu), FALSE);
-    }
-  gtk_popover_popup (GTK_POPOVER (self->menu));
-}
-
-static void
-pressed_cb (GtkGestureClick *gesture,
-            int              n_press,
-            double           x,
-            double           y,
-            CwTermsTable    *self)
-{
-  GdkRectangle at = { (int) x, (int) y, 1, 1 };
-
-  gtk_widget_grab_focus (GTK_WIDGET (self));
-  menu_action (GTK_WIDGET (self), NULL, NULL);
-  gtk_popover_set_pointing_to (GTK_POPOVER (self->menu), &at);
+  cw_copy_menu_popup (&CW_TERMS_TABLE (widget)->menu, widget, _("_Copy Table"), "terms.copy", cw_copy_menu_point (parameter, &at));
 }
 
 static void
@@ -452,10 +431,10 @@ cw_terms_table_class_init (CwTermsTableClass *klass)
   widget_class->query_tooltip = cw_terms_table_query_tooltip;
 
   gtk_widget_class_install_action (widget_class, "terms.copy", NULL, copy_action);
-  gtk_widget_class_install_action (widget_class, "terms.menu", NULL, menu_action);
+  gtk_widget_class_install_action (widget_class, "terms.menu", "(dd)", menu_action);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_c, GDK_CONTROL_MASK, "terms.copy", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F10, GDK_SHIFT_MASK, "terms.menu", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Menu, 0, "terms.menu", NULL);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F10, GDK_SHIFT_MASK, "terms.menu", "(dd)", -1.0, -1.0);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Menu, 0, "terms.menu", "(dd)", -1.0, -1.0);
   gtk_widget_class_set_css_name (widget_class, "termstable");
   gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_GROUP);
 }
@@ -463,14 +442,10 @@ cw_terms_table_class_init (CwTermsTableClass *klass)
 static void
 cw_terms_table_init (CwTermsTable *self)
 {
-  GtkGesture *click = gtk_gesture_click_new ();
-
   self->rows = g_array_new (FALSE, TRUE, sizeof (Row));
   gtk_widget_set_focusable (GTK_WIDGET (self), TRUE);
   gtk_widget_set_has_tooltip (GTK_WIDGET (self), TRUE);
-  gtk_gesture_single_set_button (GTK_GESTURE_SINGLE (click), GDK_BUTTON_SECONDARY);
-  g_signal_connect (click, "pressed", G_CALLBACK (pressed_cb), self);
-  gtk_widget_add_controller (GTK_WIDGET (self), GTK_EVENT_CONTROLLER (click));
+  cw_copy_menu_add_click (GTK_WIDGET (self), "terms.menu");
 }
 
 GtkWidget *

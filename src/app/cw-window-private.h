@@ -7,6 +7,7 @@
 #include "cw-reactivity.h"
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
+#include "cw-steady-label.h"
 #include "cw-terms-table.h"
 #include "cw-window.h"
 
@@ -18,7 +19,7 @@ struct _CwWindow
 
   /* template children */
   GtkLabel       *title_label;
-  GtkLabel       *subtitle_label;
+  CwSteadyLabel  *subtitle_label;
   GtkMenuButton  *temperature_button;
   GtkSpinButton  *temperature_spin;
   GtkAdjustment  *temperature_adjustment;
@@ -33,9 +34,9 @@ struct _CwWindow
   GtkDrawingArea *chairs_area;
   GtkDrawingArea *profile_area;
   GtkDrawingArea *scan_area;
-  GtkLabel       *pop1_label;
-  GtkLabel       *pop2_label;
-  GtkLabel       *summary_label;
+  CwSteadyLabel  *pop1_label;
+  CwSteadyLabel  *pop2_label;
+  CwSteadyLabel  *summary_label;
   GtkBox         *flags_box;
   CwTermsTable   *terms_table;
   GtkStack       *lower_stack;

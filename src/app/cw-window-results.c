@@ -226,15 +226,15 @@ update_summary (CwWindow *self)
     {
       g_autofree char *msg = g_strdup_printf (_("No result: %s"), self->analysis_error ? self->analysis_error : "");
 
-      gtk_label_set_text (self->summary_label, msg);
-      gtk_label_set_text (self->pop1_label, "");
-      gtk_label_set_text (self->pop2_label, "");
+      cw_steady_label_set_text (self->summary_label, msg);
+      cw_steady_label_set_text (self->pop1_label, "");
+      cw_steady_label_set_text (self->pop2_label, "");
       return;
     }
   p1 = format_population (1, an->pop[0], an->pop_low[0], an->pop_high[0]);
   p2 = format_population (2, an->pop[1], an->pop_low[1], an->pop_high[1]);
-  gtk_label_set_text (self->pop1_label, p1);
-  gtk_label_set_text (self->pop2_label, p2);
+  cw_steady_label_set_text (self->pop1_label, p1);
+  cw_steady_label_set_text (self->pop2_label, p2);
   set_css_class (GTK_WIDGET (self->pop1_label), "cw-major", an->pop[0] > an->pop[1] + 1e-9);
   set_css_class (GTK_WIDGET (self->pop2_label), "cw-major", an->pop[1] > an->pop[0] + 1e-9);
 
@@ -244,7 +244,7 @@ update_summary (CwWindow *self)
   text = g_strdup_printf (_("ΔG° = G(chair 2) − G(chair 1) = %+.2f ± %.2f %s at %s;  K = %s"),
                              cw_energy_from_kcal (an->delta_g, unit), cw_energy_from_kcal (an->sigma, unit),
                              cw_energy_unit_symbol (unit), t, kstr);
-  gtk_label_set_text (self->summary_label, text);
+  cw_steady_label_set_text (self->summary_label, text);
   /* Screen readers get the result with the drawing it belongs to. */
   gtk_accessible_update_property (GTK_ACCESSIBLE (self->chairs_area), GTK_ACCESSIBLE_PROPERTY_DESCRIPTION, text, -1);
 }

@@ -102,7 +102,7 @@ cw_window_update_title (CwWindow *self)
     }
   shown = modified ? g_strconcat ("• ", title, NULL) : g_strdup (title);
   gtk_label_set_text (self->title_label, shown);
-  gtk_label_set_text (self->subtitle_label, config && *config ? config : _("Substituted cyclohexane"));
+  cw_steady_label_set_text (self->subtitle_label, config && *config ? config : _("Substituted cyclohexane"));
   gtk_widget_set_visible (GTK_WIDGET (self->subtitle_label), TRUE);
   {
     g_autofree char *win_title = g_strdup_printf ("%s – %s", shown, _("Chairwise"));
@@ -468,6 +468,7 @@ cw_window_class_init (CwWindowClass *klass)
 
   g_type_ensure (CW_TYPE_RING_CANVAS);
   g_type_ensure (CW_TYPE_TERMS_TABLE);
+  g_type_ensure (CW_TYPE_STEADY_LABEL);
   g_type_ensure (CW_TYPE_GROUP_CHOOSER);
 
   gtk_widget_class_set_template_from_resource (widget_class, "/org/chairwise/Chairwise/ui/cw-window.ui");

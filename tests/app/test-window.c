@@ -53,17 +53,17 @@ test_edit_updates_results (void)
   const CwAnalysis *an;
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
-  g_assert_cmpstr (gtk_label_get_text (win->pop1_label), ==, "Chair 1: 50.0 % (50.0–50.0 %)");
+  g_assert_cmpstr (cw_steady_label_get_text (win->pop1_label), ==, "Chair 1: 50.0 % (50.0–50.0 %)");
 
   /* Methyl on the up face of C1: axial in chair 1 (DEVELOPERS.md, the model), equatorial in chair 2. */
   set_group (win, 1, "up", "methyl");
   an = cw_window_get_analysis (win);
   g_assert_nonnull (an);
   g_assert_cmpfloat_with_epsilon (an->delta_g, -methyl_a (t), 0.01);
-  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop2_label), pop2));
-  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop1_label), pop1));
+  g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop2_label), pop2));
+  g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop1_label), pop1));
   g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (win->pop2_label), "cw-major"));
-  g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kcal/mol"));
+  g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), "kcal/mol"));
   g_assert_true (cw_window_get_modified (win));
   /* The terms table lists the axial methyl: heading, the term with A(T) in chair 1 and
    * none in chair 2, its source, and the totals. */
@@ -82,8 +82,8 @@ test_edit_updates_results (void)
   g_settings_set_string (win->settings, "energy-unit", "kj");
   {
     g_autofree char *kj = g_strdup_printf ("%+.2f", -methyl_a (t) * 4.184);
-    g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), kj));
-    g_assert_nonnull (strstr (gtk_label_get_text (win->summary_label), "kJ/mol"));
+    g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), kj));
+    g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), "kJ/mol"));
     g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 0, 1), ==, "Chair 1 (kJ/mol)");
     g_free (kj);
     kj = g_strdup_printf ("%.2f", methyl_a (t) * 4.184);
@@ -96,7 +96,7 @@ test_edit_updates_results (void)
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", t);
   {
     g_autofree char *cold = expected_pop (2, equatorial_fraction (methyl_a (t), t));
-    g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop2_label), cold));
+    g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop2_label), cold));
   }
   destroy_window (win);
 }
@@ -118,7 +118,7 @@ test_undo_redo (void)
   gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
   g_assert_cmpint (cw_document_peek_molecule (cw_window_get_document (win))->n_subs, ==, 0);
   g_assert_false (cw_window_get_modified (win));
-  g_assert_true (g_str_has_prefix (gtk_label_get_text (win->pop1_label), "Chair 1: 50.0 %"));
+  g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop1_label), "Chair 1: 50.0 %"));
   gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
   gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
   spec = cw_molecule_dup_spec (cw_document_peek_molecule (cw_window_get_document (win)));
@@ -614,6 +614,54 @@ test_terms_table (void)
   app_test_pump (5, NULL);
 }
 
+/* A steady label is only redrawn when a new text fits the size it has (widths in steps of
+ * four characters, tabular figures), and asks for a new size when it does not. */
+static void
+test_steady_label (void)
+{
+  GtkWidget     *window = gtk_window_new ();
+  GtkWidget     *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
+  CwSteadyLabel *label = CW_STEADY_LABEL (cw_steady_label_new ());
+  CwSteadyLabel *wrapped = CW_STEADY_LABEL (g_object_new (CW_TYPE_STEADY_LABEL, "wrap", TRUE, "copyable", TRUE, NULL));
+  GdkContentProvider *content;
+  GValue              value = G_VALUE_INIT;
+
+  gtk_box_append (GTK_BOX (box), GTK_WIDGET (label));
+  gtk_box_append (GTK_BOX (box), GTK_WIDGET (wrapped));
+  gtk_window_set_child (GTK_WINDOW (window), box);
+  gtk_window_set_default_size (GTK_WINDOW (window), 300, -1);
+  g_assert_true (cw_steady_label_set_text (label, "Chair 1: 68.3 % (35.0–89.7 %)"));
+  g_assert_true (cw_steady_label_set_text (wrapped, "ΔG° = +0.38 kcal/mol"));
+  gtk_window_present (GTK_WINDOW (window));
+  app_test_wait_mapped (window);
+  app_test_pump (10, NULL);
+  g_assert_false (cw_steady_label_set_text (label, "Chair 1: 68.3 % (35.0–89.7 %)"));
+  g_assert_false (cw_steady_label_set_text (label, "Chair 1: 95.0 % (93.1–96.4 %)"));
+  g_assert_cmpstr (cw_steady_label_get_text (label), ==, "Chair 1: 95.0 % (93.1–96.4 %)");
+  g_assert_true (cw_steady_label_set_text (label, "Chair 1: 95.0 % (93.1–96.4 %) and a good deal more text"));
+  g_assert_false (cw_steady_label_set_text (wrapped, "ΔG° = −1.74 kcal/mol"));
+  /* Too long for one line at this width: the wrapped label grows. */
+  g_assert_true (cw_steady_label_set_text (wrapped, "ΔG° = G(chair 2) − G(chair 1) = −1.74 ± 0.02 kcal/mol at 25.0 °C;  K = 18.9"));
+  app_test_pump (10, NULL);
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (wrapped)), >, gtk_widget_get_height (GTK_WIDGET (label)));
+
+  /* The copyable one copies its text; the other has no copy action. */
+  g_assert_true (gtk_widget_activate_action (GTK_WIDGET (wrapped), "line.copy", NULL));
+  content = gdk_clipboard_get_content (gtk_widget_get_clipboard (GTK_WIDGET (wrapped)));
+  g_value_init (&value, G_TYPE_STRING);
+  g_assert_true (gdk_content_provider_get_value (content, &value, NULL));
+  g_assert_cmpstr (g_value_get_string (&value), ==, cw_steady_label_get_text (wrapped));
+  g_value_unset (&value);
+  gtk_widget_activate_action (GTK_WIDGET (label), "line.copy", NULL);
+  content = gdk_clipboard_get_content (gtk_widget_get_clipboard (GTK_WIDGET (label)));
+  g_value_init (&value, G_TYPE_STRING);
+  g_assert_true (gdk_content_provider_get_value (content, &value, NULL));
+  g_assert_cmpstr (g_value_get_string (&value), ==, cw_steady_label_get_text (wrapped));
+  g_value_unset (&value);
+  gtk_window_destroy (GTK_WINDOW (window));
+  app_test_pump (5, NULL);
+}
+
 /* X11: frame sync follows the window manager's offer of it; under a bare X server (as in
  * these tests) it is off, so that no frame asks the X server about it again. */
 static void
@@ -647,6 +695,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/frame-sync", test_frame_sync);
   g_test_add_func ("/app/window/terms-table", test_terms_table);
+  g_test_add_func ("/app/window/steady-label", test_steady_label);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);

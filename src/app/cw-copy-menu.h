@@ -1,0 +1,26 @@
+#pragma once
+
+#include <gtk/gtk.h>
+
+G_BEGIN_DECLS
+
+/* The context menu of a drawn text widget: one item that copies its text. A right click
+ * (cw_copy_menu_add_click) or a key bound to the widget's menu action opens it. */
+
+/* Opens the menu (made on first use and kept in *menu, which the widget unparents in its
+ * dispose) with one item, label → action; at is where it points, NULL for the whole
+ * widget. */
+void cw_copy_menu_popup (GtkWidget             **menu,
+                         GtkWidget              *widget,
+                         const char             *label,
+                         const char             *action,
+                         const graphene_point_t *at);
+/* A right click on the widget takes the focus and activates menu_action, whose parameter
+ * "(dd)" is the pointer position. Keys bound to it pass (-1, -1). */
+void cw_copy_menu_add_click (GtkWidget  *widget,
+                             const char *menu_action);
+/* The position in a menu action's "(dd)" parameter, or NULL for none. */
+const graphene_point_t *cw_copy_menu_point (GVariant         *parameter,
+                                            graphene_point_t *point);
+
+G_END_DECLS
