@@ -8,7 +8,7 @@
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
 #include "cw-steady-label.h"
-#include "cw-terms-table.h"
+#include "cw-result-sheet.h"
 #include "cw-window.h"
 
 G_BEGIN_DECLS
@@ -37,8 +37,7 @@ struct _CwWindow
   CwSteadyLabel  *pop1_label;
   CwSteadyLabel  *pop2_label;
   CwSteadyLabel  *summary_label;
-  GtkBox         *flags_box;
-  CwTermsTable   *terms_table;
+  CwResultSheet   *result_sheet;
   GtkStack       *lower_stack;
   GtkLabel       *caution_label;
   GMenu          *recent_section;
@@ -67,7 +66,6 @@ struct _CwWindow
 
   /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
    * what an edit would otherwise spend most of its time on) */
-  GPtrArray *flag_rows;  /* GtkGrid* holding a GtkImage and a GtkLabel */
 
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
    * figure as it was does not redraw it */

@@ -41,68 +41,6 @@ set_css_class (GtkWidget  *widget,
     gtk_widget_remove_css_class (widget, css);
 }
 
-/* ---- flags ------------------------------------------------------------------------- */
-
-static GtkWidget *
-flag_row (CwWindow *self,
-          guint     i)
-{
-  GtkWidget *row, *icon, *label;
-
-  if (i < self->flag_rows->len)
-    return g_ptr_array_index (self->flag_rows, i);
-  /* A grid, not a horizontal box: a box asks its wrapping label for its width at the
-   * row's height, which GtkLabel answers by laying the text out again and again (a
-   * binary search over widths, 20 ms and more for one new flag); the grid asks for
-   * widths first and heights for them after, as the label is laid out anyway. */
-  row = gtk_grid_new ();
-  icon = gtk_image_new ();
-  label = gtk_label_new (NULL);
-  gtk_grid_set_column_spacing (GTK_GRID (row), 8);
-  gtk_widget_add_css_class (row, "cw-flag");
-  gtk_widget_set_valign (icon, GTK_ALIGN_START);
-  gtk_label_set_wrap (GTK_LABEL (label), TRUE);
-  gtk_label_set_xalign (GTK_LABEL (label), 0.0f);
-  gtk_widget_set_hexpand (label, TRUE);
-  gtk_grid_attach (GTK_GRID (row), icon, 0, 0, 1, 1);
-  gtk_grid_attach (GTK_GRID (row), label, 1, 0, 1, 1);
-  gtk_box_append (self->flags_box, row);
-  g_ptr_array_add (self->flag_rows, row);
-  return row;
-}
-
-static void
-update_flags (CwWindow *self)
-{
-  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
-  CwEnergyUnit      unit = cw_window_get_energy_unit (self);
-  int               n = self->an_valid ? self->an.n_flags : 0;
-
-  for (int i = 0; i < n; i++)
-    {
-      gboolean         info = flag_is_info (self->an.flags[i].code);
-      g_autofree char *msg = cw_flag_dup_message (&self->an.flags[i], mol, unit);
-      GtkWidget       *row = flag_row (self, i);
-      GtkWidget       *icon = gtk_widget_get_first_child (row);
-      GtkWidget       *label = gtk_widget_get_next_sibling (icon);
-      const char      *icon_name = info ? "dialog-information-symbolic" : "dialog-warning-symbolic";
-
-      set_css_class (row, "cw-info", info);
-      /* Setting the same icon again would still make the image measure and draw anew. */
-      if (g_strcmp0 (gtk_image_get_icon_name (GTK_IMAGE (icon)), icon_name) != 0)
-        {
-          gtk_image_set_from_icon_name (GTK_IMAGE (icon), icon_name);
-          gtk_accessible_update_property (GTK_ACCESSIBLE (icon), GTK_ACCESSIBLE_PROPERTY_LABEL,
-                                          info ? _("Note") : _("Warning"), -1);
-        }
-      gtk_label_set_text (GTK_LABEL (label), msg);
-      gtk_widget_set_visible (row, TRUE);
-    }
-  for (guint i = n; i < self->flag_rows->len; i++)
-    gtk_widget_set_visible (g_ptr_array_index (self->flag_rows, i), FALSE);
-  gtk_widget_set_visible (GTK_WIDGET (self->flags_box), n > 0);
-}
-
 /* ---- terms table -------------------------------------------------------------------- */
 
 static const CwTerm *
@@ -122,7 +60,7 @@ find_term (const CwChair *chair,
 /* The rows' texts, kept until the table has taken them. */
 typedef struct
 {
-  GArray    *rows;  /* CwTermsTableRow */
+  GArray    *rows;  /* CwSheetRow */
   GPtrArray *texts; /* char *, freed with the table */
 } TermRows;
 
@@ -134,7 +72,7 @@ add_row (TermRows   *t,
          const char *c2,
          const char *c3)
 {
-  CwTermsTableRow row = { { c0, c1, c2, c3 }, heading };
+  CwSheetRow row = { { c0, c1, c2, c3 }, heading };
 
   g_array_append_val (t->rows, row);
 }
@@ -167,12 +105,21 @@ term_row (CwWindow     *self,
   add_row (rows, FALSE, label, e1, e2, source);
 }
 
+/* The flags and the terms table, one sheet. */
 static void
-update_terms (CwWindow *self)
+update_sheet (CwWindow *self)
 {
-  CwEnergyUnit unit = cw_window_get_energy_unit (self);
-  TermRows     rows = { g_array_new (FALSE, FALSE, sizeof (CwTermsTableRow)), g_ptr_array_new_with_free_func (g_free) };
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  CwEnergyUnit      unit = cw_window_get_energy_unit (self);
+  TermRows          rows = { g_array_new (FALSE, FALSE, sizeof (CwSheetRow)), g_ptr_array_new_with_free_func (g_free) };
+  int               n_flags = self->an_valid ? self->an.n_flags : 0;
+  CwSheetFlag       flags[CW_MAX_FLAGS];
 
+  for (int i = 0; i < n_flags; i++)
+    {
+      flags[i].text = keep (&rows, cw_flag_dup_message (&self->an.flags[i], mol, unit));
+      flags[i].info = flag_is_info (self->an.flags[i].code);
+    }
   if (self->an_valid)
     {
       /* TRANSLATORS: column header: energy of a term in chair 1, with the unit */
@@ -195,7 +142,8 @@ update_terms (CwWindow *self)
                keep (&rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[0].energy, unit))),
                keep (&rows, g_strdup_printf ("%.2f", cw_energy_from_kcal (self->an.chair[1].energy, unit))), "");
     }
-  cw_terms_table_set_rows (self->terms_table, (const CwTermsTableRow *) (void *) rows.rows->data, rows.rows->len);
+  cw_result_sheet_set_content (self->result_sheet, flags, n_flags, (const CwSheetRow *) (void *) rows.rows->data,
+                               rows.rows->len);
   g_array_unref (rows.rows);
   g_ptr_array_unref (rows.texts);
 }
@@ -253,6 +201,5 @@ void
 cw_window_update_results (CwWindow *self)
 {
   update_summary (self);
-  update_terms (self);
-  update_flags (self);
+  update_sheet (self);
 }

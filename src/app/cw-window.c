@@ -447,7 +447,6 @@ cw_window_finalize (GObject *object)
   g_clear_pointer (&self->couplings, g_free);
   g_clear_pointer (&self->reactivity, g_free);
   g_clear_pointer (&self->isomers, cw_isomer_set_free);
-  g_clear_pointer (&self->flag_rows, g_ptr_array_unref);
   cw_window_clear_figures (self);
 
   G_OBJECT_CLASS (cw_window_parent_class)->finalize (object);
@@ -467,7 +466,7 @@ cw_window_class_init (CwWindowClass *klass)
   widget_class->unrealize = cw_window_unrealize;
 
   g_type_ensure (CW_TYPE_RING_CANVAS);
-  g_type_ensure (CW_TYPE_TERMS_TABLE);
+  g_type_ensure (CW_TYPE_RESULT_SHEET);
   g_type_ensure (CW_TYPE_STEADY_LABEL);
   g_type_ensure (CW_TYPE_GROUP_CHOOSER);
 
@@ -491,8 +490,7 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, CwWindow, pop1_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, pop2_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, summary_label);
-  gtk_widget_class_bind_template_child (widget_class, CwWindow, flags_box);
-  gtk_widget_class_bind_template_child (widget_class, CwWindow, terms_table);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, result_sheet);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, lower_stack);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, caution_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, recent_section);
@@ -544,7 +542,6 @@ cw_window_init (CwWindow *self)
   self->doc = cw_document_new ();
   cw_document_set_temperature (self->doc, g_settings_get_double (self->settings, "default-temperature"));
   self->groups_store = g_list_store_new (CW_TYPE_GROUP_ITEM);
-  self->flag_rows = g_ptr_array_new ();
   self->n_custom_shown = G_MAXUINT;
 
   tunit = g_settings_create_action (self->settings, "temperature-unit");

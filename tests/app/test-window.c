@@ -67,16 +67,16 @@ test_edit_updates_results (void)
   g_assert_true (cw_window_get_modified (win));
   /* The terms table lists the axial methyl: heading, the term with A(T) in chair 1 and
    * none in chair 2, its source, and the totals. */
-  g_assert_cmpuint (cw_terms_table_get_n_rows (win->terms_table), ==, 3);
+  g_assert_cmpuint (cw_result_sheet_get_n_rows (win->result_sheet), ==, 3);
   {
     g_autofree char *a = g_strdup_printf ("%.2f", methyl_a (t));
 
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 1), ==, a);
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 2), ==, "–");
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 2, 0), ==, "Total");
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 2, 1), ==, a);
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 1, 1), ==, a);
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 1, 2), ==, "–");
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 2, 0), ==, "Total");
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 2, 1), ==, a);
   }
-  g_assert_nonnull (strstr (cw_terms_table_get_cell (win->terms_table, 1, 3), "Booth"));
+  g_assert_nonnull (strstr (cw_result_sheet_get_cell (win->result_sheet, 1, 3), "Booth"));
 
   /* kJ/mol: the same ΔG° times 4.184 shows in the result line. */
   g_settings_set_string (win->settings, "energy-unit", "kj");
@@ -84,10 +84,10 @@ test_edit_updates_results (void)
     g_autofree char *kj = g_strdup_printf ("%+.2f", -methyl_a (t) * 4.184);
     g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), kj));
     g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), "kJ/mol"));
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 0, 1), ==, "Chair 1 (kJ/mol)");
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 0, 1), ==, "Chair 1 (kJ/mol)");
     g_free (kj);
     kj = g_strdup_printf ("%.2f", methyl_a (t) * 4.184);
-    g_assert_cmpstr (cw_terms_table_get_cell (win->terms_table, 1, 1), ==, kj);
+    g_assert_cmpstr (cw_result_sheet_get_cell (win->result_sheet, 1, 1), ==, kj);
   }
   g_settings_set_string (win->settings, "energy-unit", "kcal");
 
@@ -571,45 +571,76 @@ test_dark_style (void)
   destroy_window (win);
 }
 
-/* The terms table redraws a change that keeps its size and lays itself out again only
- * when its size changes; its text (copied with Ctrl+C) is tab-separated. */
+/* The result sheet (flags, title, terms table) redraws new content that fits the room it
+ * has, grows at once when the content needs more, and gives room back when asked (or
+ * after a pause); its text (copied with Ctrl+C) has the flags, the title and the table
+ * with tab-separated cells. */
 static void
-test_terms_table (void)
+test_result_sheet (void)
 {
-  GtkWidget            *window = gtk_window_new ();
-  CwTermsTable         *table = CW_TERMS_TABLE (cw_terms_table_new ());
-  const CwTermsTableRow two[] = { { { "Term", "Chair 1", "Chair 2", "Source" }, TRUE },
-                                  { { "1,3-diaxial", "0.87", "–", "a table" }, FALSE } };
-  const CwTermsTableRow other[] = { two[0], { { "1,3-diaxial", "0.12", "–", "a table" }, FALSE } };
-  const CwTermsTableRow three[] = { two[0], two[1], { { "Total", "0.87", NULL, NULL }, TRUE } };
-  GdkContentProvider   *content;
-  GValue                value = G_VALUE_INIT;
+  GtkWidget        *window = gtk_window_new ();
+  GtkWidget        *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
+  CwResultSheet    *sheet = CW_RESULT_SHEET (g_object_new (CW_TYPE_RESULT_SHEET, "title", "Terms", NULL));
+  const CwSheetRow  two[] = { { { "Term", "Chair 1", "Chair 2", "Source" }, TRUE },
+                              { { "1,3-diaxial", "0.87", "–", "a table" }, FALSE } };
+  const CwSheetRow  other[] = { two[0], { { "1,3-diaxial", "0.12", "–", "a table" }, FALSE } };
+  const CwSheetRow  three[] = { two[0], two[1], { { "Total", "0.87", NULL, NULL }, TRUE } };
+  const CwSheetFlag flag[] = { { "A warning that is long enough to wrap onto a second line in a window this narrow", FALSE },
+                               { "A note", TRUE } };
+  GdkContentProvider *content;
+  GValue              value = G_VALUE_INIT;
+  gboolean            info = FALSE;
+  int                 h2, h3;
 
-  gtk_window_set_child (GTK_WINDOW (window), GTK_WIDGET (table));
+  gtk_box_append (GTK_BOX (box), GTK_WIDGET (sheet));
+  gtk_window_set_child (GTK_WINDOW (window), box);
+  gtk_window_set_default_size (GTK_WINDOW (window), 360, -1);
   gtk_window_present (GTK_WINDOW (window));
   app_test_wait_mapped (window);
-  g_assert_cmpint (cw_terms_table_set_rows (table, two, 2), ==, CW_TERMS_TABLE_RESIZED);
-  g_assert_cmpint (cw_terms_table_set_rows (table, two, 2), ==, CW_TERMS_TABLE_UNCHANGED);
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, two, 2), ==, CW_SHEET_RESIZED);
+  app_test_pump (100, NULL);
+  h2 = gtk_widget_get_height (GTK_WIDGET (sheet));
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, two, 2), ==, CW_SHEET_UNCHANGED);
   /* Tabular figures: another number of the same length keeps every column's width. */
-  g_assert_cmpint (cw_terms_table_set_rows (table, other, 2), ==, CW_TERMS_TABLE_REDRAWN);
-  g_assert_cmpint (cw_terms_table_set_rows (table, three, 3), ==, CW_TERMS_TABLE_RESIZED);
-  g_assert_cmpstr (cw_terms_table_get_cell (table, 2, 2), ==, "");
-  g_assert_null (cw_terms_table_get_cell (table, 3, 0));
-  g_assert_cmpstr (cw_terms_table_get_text (table), ==,
-                   "Term\tChair 1\tChair 2\tSource\n1,3-diaxial\t0.87\t–\ta table\nTotal\t0.87\t\t\n");
-  app_test_pump (5, NULL);
-  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (table)), >, 0);
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, other, 2), ==, CW_SHEET_REDRAWN);
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, three, 3), ==, CW_SHEET_RESIZED);
+  app_test_pump (100, NULL);
+  h3 = gtk_widget_get_height (GTK_WIDGET (sheet));
+  g_assert_cmpint (h3, >, h2);
+  /* Fewer rows fit the room it has: redrawn, and the room is kept until given back. */
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, two, 2), ==, CW_SHEET_REDRAWN);
+  app_test_pump (100, NULL);
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (sheet)), ==, h3);
+  cw_result_sheet_shrink (sheet);
+  app_test_pump (100, NULL);
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (sheet)), ==, h2);
 
-  gtk_widget_activate_action (GTK_WIDGET (table), "terms.copy", NULL);
-  content = gdk_clipboard_get_content (gtk_widget_get_clipboard (GTK_WIDGET (table)));
+  /* Flags above the title: more room, then a changed text of the same length is redrawn. */
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, flag, 2, three, 3), ==, CW_SHEET_RESIZED);
+  app_test_pump (100, NULL);
+  g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (sheet)), >, h3);
+  g_assert_cmpuint (cw_result_sheet_get_n_flags (sheet), ==, 2);
+  g_assert_cmpstr (cw_result_sheet_get_flag (sheet, 1, &info), ==, "A note");
+  g_assert_true (info);
+  g_assert_null (cw_result_sheet_get_flag (sheet, 2, NULL));
+  g_assert_cmpstr (cw_result_sheet_get_cell (sheet, 2, 2), ==, "");
+  g_assert_null (cw_result_sheet_get_cell (sheet, 3, 0));
+  g_assert_cmpstr (cw_result_sheet_get_text (sheet), ==,
+                   "Warning: A warning that is long enough to wrap onto a second line in a window this narrow\n"
+                   "Note: A note\n"
+                   "Terms\n"
+                   "Term\tChair 1\tChair 2\tSource\n1,3-diaxial\t0.87\t–\ta table\nTotal\t0.87\t\t\n");
+
+  gtk_widget_activate_action (GTK_WIDGET (sheet), "sheet.copy", NULL);
+  content = gdk_clipboard_get_content (gtk_widget_get_clipboard (GTK_WIDGET (sheet)));
   g_assert_nonnull (content);
   g_value_init (&value, G_TYPE_STRING);
   g_assert_true (gdk_content_provider_get_value (content, &value, NULL));
-  g_assert_cmpstr (g_value_get_string (&value), ==, cw_terms_table_get_text (table));
+  g_assert_cmpstr (g_value_get_string (&value), ==, cw_result_sheet_get_text (sheet));
   g_value_unset (&value);
 
-  g_assert_cmpint (cw_terms_table_set_rows (table, NULL, 0), ==, CW_TERMS_TABLE_RESIZED);
-  g_assert_cmpstr (cw_terms_table_get_text (table), ==, "");
+  g_assert_cmpint (cw_result_sheet_set_content (sheet, NULL, 0, NULL, 0), ==, CW_SHEET_REDRAWN);
+  g_assert_cmpstr (cw_result_sheet_get_text (sheet), ==, "Terms\n");
   gtk_window_destroy (GTK_WINDOW (window));
   app_test_pump (5, NULL);
 }
@@ -634,7 +665,7 @@ test_steady_label (void)
   g_assert_true (cw_steady_label_set_text (wrapped, "ΔG° = +0.38 kcal/mol"));
   gtk_window_present (GTK_WINDOW (window));
   app_test_wait_mapped (window);
-  app_test_pump (10, NULL);
+  app_test_pump (100, NULL);
   g_assert_false (cw_steady_label_set_text (label, "Chair 1: 68.3 % (35.0–89.7 %)"));
   g_assert_false (cw_steady_label_set_text (label, "Chair 1: 95.0 % (93.1–96.4 %)"));
   g_assert_cmpstr (cw_steady_label_get_text (label), ==, "Chair 1: 95.0 % (93.1–96.4 %)");
@@ -642,7 +673,7 @@ test_steady_label (void)
   g_assert_false (cw_steady_label_set_text (wrapped, "ΔG° = −1.74 kcal/mol"));
   /* Too long for one line at this width: the wrapped label grows. */
   g_assert_true (cw_steady_label_set_text (wrapped, "ΔG° = G(chair 2) − G(chair 1) = −1.74 ± 0.02 kcal/mol at 25.0 °C;  K = 18.9"));
-  app_test_pump (10, NULL);
+  app_test_pump (100, NULL);
   g_assert_cmpint (gtk_widget_get_height (GTK_WIDGET (wrapped)), >, gtk_widget_get_height (GTK_WIDGET (label)));
 
   /* The copyable one copies its text; the other has no copy action. */
@@ -694,7 +725,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/frame-sync", test_frame_sync);
-  g_test_add_func ("/app/window/terms-table", test_terms_table);
+  g_test_add_func ("/app/window/result-sheet", test_result_sheet);
   g_test_add_func ("/app/window/steady-label", test_steady_label);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
