@@ -17,6 +17,7 @@ struct _CwSteadyLabel
   PangoLayout *layout;
   gboolean     wrap;
   gboolean     ellipsize;
+  gboolean     bold;
   float        xalign;
   gboolean     copyable;
   guint        context_serial;
@@ -43,6 +44,19 @@ enum
 };
 
 static GParamSpec *props[N_PROPS];
+
+/* Tabular figures, so that a number that changes keeps its width; bold when set. */
+static void
+set_attributes (CwSteadyLabel *self)
+{
+  PangoAttrList *attrs = pango_attr_list_new ();
+
+  pango_attr_list_insert (attrs, pango_attr_font_features_new ("tnum"));
+  if (self->bold)
+    pango_attr_list_insert (attrs, pango_attr_weight_new (PANGO_WEIGHT_BOLD));
+  pango_layout_set_attributes (self->layout, attrs);
+  pango_attr_list_unref (attrs);
+}
 
 static void
 set_layout_width (CwSteadyLabel *self,
@@ -140,6 +154,41 @@ cw_steady_label_set_text (CwSteadyLabel *self,
   gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_LABEL, text, -1);
   g_object_notify_by_pspec (G_OBJECT (self), props[PROP_TEXT]);
   return resize;
+}
+
+/* Bold through the text's own attributes, not a style class: changing a style class
+ * makes GTK restyle and lay out the window. */
+gboolean
+cw_steady_label_set_bold (CwSteadyLabel *self,
+                          gboolean       bold)
+{
+  int old_min, old_nat, old_height;
+
+  g_return_val_if_fail (CW_IS_STEADY_LABEL (self), FALSE);
+  bold = bold != FALSE;
+  if (bold == self->bold)
+    return FALSE;
+  self->bold = bold;
+  old_min = self->min_width;
+  old_nat = self->nat_width;
+  old_height = self->line_height;
+  set_attributes (self);
+  check_context (self);
+  compute_widths (self);
+  if (self->min_width != old_min || self->nat_width != old_nat || self->line_height != old_height)
+    {
+      gtk_widget_queue_resize (GTK_WIDGET (self));
+      return TRUE;
+    }
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+  return FALSE;
+}
+
+gboolean
+cw_steady_label_get_bold (CwSteadyLabel *self)
+{
+  g_return_val_if_fail (CW_IS_STEADY_LABEL (self), FALSE);
+  return self->bold;
 }
 
 const char *
@@ -373,14 +422,7 @@ cw_steady_label_init (CwSteadyLabel *self)
   self->layout_width = -1;
   self->layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), NULL);
   pango_layout_set_wrap (self->layout, PANGO_WRAP_WORD_CHAR);
-  /* Tabular figures: a number that changes keeps its width. */
-  {
-    PangoAttrList *attrs = pango_attr_list_new ();
-
-    pango_attr_list_insert (attrs, pango_attr_font_features_new ("tnum"));
-    pango_layout_set_attributes (self->layout, attrs);
-    pango_attr_list_unref (attrs);
-  }
+  set_attributes (self);
   set_copyable (self, FALSE);
   cw_copy_menu_add_click (GTK_WIDGET (self), "line.menu");
 }

@@ -20,5 +20,9 @@ GtkWidget *cw_steady_label_new (void);
 gboolean    cw_steady_label_set_text (CwSteadyLabel *self,
                                       const char    *text);
 const char *cw_steady_label_get_text (CwSteadyLabel *self);
+/* Bold text (returns TRUE when that asked for a new size). */
+gboolean cw_steady_label_set_bold (CwSteadyLabel *self,
+                                   gboolean       bold);
+gboolean cw_steady_label_get_bold (CwSteadyLabel *self);
 
 G_END_DECLS

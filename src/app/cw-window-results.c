@@ -183,8 +183,9 @@ update_summary (CwWindow *self)
   p2 = format_population (2, an->pop[1], an->pop_low[1], an->pop_high[1]);
   cw_steady_label_set_text (self->pop1_label, p1);
   cw_steady_label_set_text (self->pop2_label, p2);
-  set_css_class (GTK_WIDGET (self->pop1_label), "cw-major", an->pop[0] > an->pop[1] + 1e-9);
-  set_css_class (GTK_WIDGET (self->pop2_label), "cw-major", an->pop[1] > an->pop[0] + 1e-9);
+  /* The major chair's population in bold. */
+  cw_steady_label_set_bold (self->pop1_label, an->pop[0] > an->pop[1] + 1e-9);
+  cw_steady_label_set_bold (self->pop2_label, an->pop[1] > an->pop[0] + 1e-9);
 
   t = cw_format_temperature (an->temperature, cw_window_get_temperature_unit (self));
   kstr = (an->K >= 1e4 || an->K < 1e-3) ? g_strdup_printf ("%.2e", an->K) : g_strdup_printf ("%.3g", an->K);

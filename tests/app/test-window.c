@@ -62,7 +62,8 @@ test_edit_updates_results (void)
   g_assert_cmpfloat_with_epsilon (an->delta_g, -methyl_a (t), 0.01);
   g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop2_label), pop2));
   g_assert_true (g_str_has_prefix (cw_steady_label_get_text (win->pop1_label), pop1));
-  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (win->pop2_label), "cw-major"));
+  g_assert_true (cw_steady_label_get_bold (win->pop2_label));
+  g_assert_false (cw_steady_label_get_bold (win->pop1_label));
   g_assert_nonnull (strstr (cw_steady_label_get_text (win->summary_label), "kcal/mol"));
   g_assert_true (cw_window_get_modified (win));
   /* The terms table lists the axial methyl: heading, the term with A(T) in chair 1 and
