@@ -2,10 +2,27 @@
 
 #include "cw-copy-menu.h"
 
+#include <glib/gi18n.h>
+
+void
+cw_copy_menu_install (GtkWidgetClass             *widget_class,
+                      const char                 *prefix,
+                      GtkWidgetActionActivateFunc copy,
+                      GtkWidgetActionActivateFunc menu)
+{
+  g_autofree char *copy_name = g_strconcat (prefix, ".copy", NULL);
+  g_autofree char *menu_name = g_strconcat (prefix, ".menu", NULL);
+
+  gtk_widget_class_install_action (widget_class, copy_name, NULL, copy);
+  gtk_widget_class_install_action (widget_class, menu_name, "(dd)", menu);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_c, GDK_CONTROL_MASK, copy_name, NULL);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F10, GDK_SHIFT_MASK, menu_name, "(dd)", -1.0, -1.0);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Menu, 0, menu_name, "(dd)", -1.0, -1.0);
+}
+
 void
 cw_copy_menu_popup (GtkWidget             **menu,
                     GtkWidget              *widget,
-                    const char             *label,
                     const char             *action,
                     const graphene_point_t *at)
 {
@@ -13,7 +30,7 @@ cw_copy_menu_popup (GtkWidget             **menu,
     {
       g_autoptr (GMenu) model = g_menu_new ();
 
-      g_menu_append (model, label, action);
+      g_menu_append (model, _("_Copy"), action);
       *menu = gtk_popover_menu_new_from_model (G_MENU_MODEL (model));
       gtk_widget_set_parent (*menu, widget);
       gtk_popover_set_has_arrow (GTK_POPOVER (*menu), FALSE);

@@ -735,7 +735,7 @@ menu_action (GtkWidget  *widget,
 {
   graphene_point_t at;
 
-  cw_copy_menu_popup (&CW_RESULT_SHEET (widget)->menu, widget, _("_Copy Table"), "sheet.copy", cw_copy_menu_point (parameter, &at));
+  cw_copy_menu_popup (&CW_RESULT_SHEET (widget)->menu, widget, "sheet.copy", cw_copy_menu_point (parameter, &at));
 }
 
 /* ---- object ------------------------------------------------------------------------- */
@@ -842,11 +842,7 @@ cw_result_sheet_class_init (CwResultSheetClass *klass)
   props[PROP_TITLE] = g_param_spec_string ("title", NULL, NULL, NULL, G_PARAM_READWRITE | G_PARAM_STATIC_STRINGS);
   g_object_class_install_properties (object_class, N_PROPS, props);
 
-  gtk_widget_class_install_action (widget_class, "sheet.copy", NULL, copy_action);
-  gtk_widget_class_install_action (widget_class, "sheet.menu", "(dd)", menu_action);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_c, GDK_CONTROL_MASK, "sheet.copy", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F10, GDK_SHIFT_MASK, "sheet.menu", "(dd)", -1.0, -1.0);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Menu, 0, "sheet.menu", "(dd)", -1.0, -1.0);
+  cw_copy_menu_install (widget_class, "sheet", copy_action, menu_action);
   gtk_widget_class_set_css_name (widget_class, "resultsheet");
   gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_GROUP);
 }

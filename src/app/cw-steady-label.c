@@ -272,7 +272,7 @@ menu_action (GtkWidget  *widget,
 {
   graphene_point_t at;
 
-  cw_copy_menu_popup (&CW_STEADY_LABEL (widget)->menu, widget, _("_Copy"), "line.copy", cw_copy_menu_point (parameter, &at));
+  cw_copy_menu_popup (&CW_STEADY_LABEL (widget)->menu, widget, "line.copy", cw_copy_menu_point (parameter, &at));
 }
 
 static void
@@ -406,11 +406,7 @@ cw_steady_label_class_init (CwSteadyLabelClass *klass)
   props[PROP_COPYABLE] = g_param_spec_boolean ("copyable", NULL, NULL, FALSE, G_PARAM_READWRITE | G_PARAM_STATIC_STRINGS);
   g_object_class_install_properties (object_class, N_PROPS, props);
 
-  gtk_widget_class_install_action (widget_class, "line.copy", NULL, copy_action);
-  gtk_widget_class_install_action (widget_class, "line.menu", "(dd)", menu_action);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_c, GDK_CONTROL_MASK, "line.copy", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F10, GDK_SHIFT_MASK, "line.menu", "(dd)", -1.0, -1.0);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Menu, 0, "line.menu", "(dd)", -1.0, -1.0);
+  cw_copy_menu_install (widget_class, "line", copy_action, menu_action);
   gtk_widget_class_set_css_name (widget_class, "label");
   gtk_widget_class_set_accessible_role (widget_class, GTK_ACCESSIBLE_ROLE_LABEL);
 }
