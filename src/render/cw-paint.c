@@ -159,11 +159,20 @@ paint_prim (cairo_t *cr, const CwScene *scene, const CwPrim *p, gboolean is_dark
   cairo_set_line_width (cr, p->line_width);
   cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
   cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
-  dashes[0] = p->dash;
-  dashes[1] = p->dash < 2 ? p->dash + 2.0 : p->dash * 0.7;
-  cairo_set_dash (cr, dashes, p->dash > 0 ? 2 : 0, 0);
-  if (p->dash > 0 && p->dash < 2)
-    cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
+  /* Dots (dash < 2) and dashes have square ends and are as long as round ends would make
+   * them: Cairo builds each round end as a small polygon, and the dotted guide lines of a
+   * plot have hundreds of them (they were a third of the energy profile's drawing time). */
+  if (p->dash > 0)
+    {
+      double gap = p->dash < 2 ? p->dash + 2.0 : p->dash * 0.7;
+
+      dashes[0] = p->dash + p->line_width;
+      dashes[1] = MAX (gap - p->line_width, 0.1);
+      cairo_set_dash (cr, dashes, 2, 0);
+      cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+    }
+  else
+    cairo_set_dash (cr, NULL, 0, 0);
   switch (p->kind)
     {
     case CW_PRIM_LINE:
