@@ -111,17 +111,6 @@ cell_set_attributes (Cell    *cell,
 }
 
 static void
-cell_measure (Cell *cell)
-{
-  if (cell->layout_width != -1)
-    {
-      pango_layout_set_width (cell->layout, -1);
-      cell->layout_width = -1;
-    }
-  pango_layout_get_pixel_size (cell->layout, &cell->width, &cell->height);
-}
-
-static void
 layout_set_width (PangoLayout *layout,
                   int         *current,
                   int          width)
@@ -131,6 +120,13 @@ layout_set_width (PangoLayout *layout,
       pango_layout_set_width (layout, width);
       *current = width;
     }
+}
+
+static void
+cell_measure (Cell *cell)
+{
+  layout_set_width (cell->layout, &cell->layout_width, -1);
+  pango_layout_get_pixel_size (cell->layout, &cell->width, &cell->height);
 }
 
 static void
@@ -416,10 +412,15 @@ cw_result_sheet_shrink (CwResultSheet *self)
   g_return_if_fail (CW_IS_RESULT_SHEET (self));
   g_clear_handle_id (&self->shrink_id, g_source_remove);
   width = gtk_widget_get_width (GTK_WIDGET (self));
-  if (width > 0 && width == self->room_width && content_height (self, width) < self->room)
+  if (width > 0 && width == self->room_width)
     {
-      self->room = content_height (self, width);
-      gtk_widget_queue_resize (GTK_WIDGET (self));
+      int need = content_height (self, width);
+
+      if (need < self->room)
+        {
+          self->room = need;
+          gtk_widget_queue_resize (GTK_WIDGET (self));
+        }
     }
 }
 

@@ -122,6 +122,30 @@ height_for_width (CwSteadyLabel *self,
   return height;
 }
 
+/* After a change of text or weight: asks for a new size when the widths it asks for
+ * changed or the text no longer has the height it was given, else only redraws. Returns
+ * TRUE when it asked for a new size. */
+static gboolean
+queue_change (CwSteadyLabel *self,
+              int            old_min,
+              int            old_nat,
+              int            old_height)
+{
+  int      width = gtk_widget_get_width (GTK_WIDGET (self));
+  gboolean resize;
+
+  check_context (self);
+  compute_widths (self);
+  resize = self->min_width != old_min || self->nat_width != old_nat ||
+           (width > 0 ? height_for_width (self, width) != gtk_widget_get_height (GTK_WIDGET (self))
+                      : self->line_height != old_height);
+  if (resize)
+    gtk_widget_queue_resize (GTK_WIDGET (self));
+  else
+    gtk_widget_queue_draw (GTK_WIDGET (self));
+  return resize;
+}
+
 gboolean
 cw_steady_label_set_text (CwSteadyLabel *self,
                           const char    *text)
@@ -140,17 +164,7 @@ cw_steady_label_set_text (CwSteadyLabel *self,
   g_free (self->text);
   self->text = g_strdup (text);
   pango_layout_set_text (self->layout, text, -1);
-  check_context (self);
-  compute_widths (self);
-  /* Laid out before: the same widths, and the same height at the width it has. */
-  resize = self->min_width != old_min || self->nat_width != old_nat ||
-           (gtk_widget_get_width (GTK_WIDGET (self)) > 0
-              ? height_for_width (self, gtk_widget_get_width (GTK_WIDGET (self))) != gtk_widget_get_height (GTK_WIDGET (self))
-              : self->line_height != old_height);
-  if (resize)
-    gtk_widget_queue_resize (GTK_WIDGET (self));
-  else
-    gtk_widget_queue_draw (GTK_WIDGET (self));
+  resize = queue_change (self, old_min, old_nat, old_height);
   gtk_accessible_update_property (GTK_ACCESSIBLE (self), GTK_ACCESSIBLE_PROPERTY_LABEL, text, -1);
   g_object_notify_by_pspec (G_OBJECT (self), props[PROP_TEXT]);
   return resize;
@@ -173,15 +187,7 @@ cw_steady_label_set_bold (CwSteadyLabel *self,
   old_nat = self->nat_width;
   old_height = self->line_height;
   set_attributes (self);
-  check_context (self);
-  compute_widths (self);
-  if (self->min_width != old_min || self->nat_width != old_nat || self->line_height != old_height)
-    {
-      gtk_widget_queue_resize (GTK_WIDGET (self));
-      return TRUE;
-    }
-  gtk_widget_queue_draw (GTK_WIDGET (self));
-  return FALSE;
+  return queue_change (self, old_min, old_nat, old_height);
 }
 
 gboolean

@@ -7,8 +7,8 @@
 #include "cw-reactivity.h"
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
-#include "cw-steady-label.h"
 #include "cw-result-sheet.h"
+#include "cw-steady-label.h"
 #include "cw-window.h"
 
 G_BEGIN_DECLS
@@ -64,9 +64,6 @@ struct _CwWindow
   CwReactivity *reactivity; /* valid when reactivity_valid */
   CwIsomerSet  *isomers;    /* what the isomers page shows, NULL until it is shown */
 
-  /* borrowed: pooled result widgets, reused across edits (creating GtkLabels is
-   * what an edit would otherwise spend most of its time on) */
-
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
    * figure as it was does not redraw it */
   CwScene *figure_drawn[3];
@@ -108,7 +105,6 @@ void              cw_window_begin_edit (CwWindow   *self,
 void              cw_window_end_edit (CwWindow *self);
 void              cw_window_refresh (CwWindow *self);
 void              cw_window_update_title (CwWindow *self);
-void              cw_window_update_frame_sync (CwWindow *self);
 void              cw_window_show_error (CwWindow     *self,
                                         const char   *primary,
                                         const GError *error);

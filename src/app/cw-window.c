@@ -365,8 +365,8 @@ first_frame_cb (GdkFrameClock *clock,
  * a frame, about a fifth of a millisecond each, for an answer that stays no. The window
  * turns frame sync off while no window manager offers it, which is what GDK does then
  * anyway, and turns it back on when a window manager that does appears. */
-void
-cw_window_update_frame_sync (CwWindow *self)
+static void
+update_frame_sync (CwWindow *self)
 {
 #ifdef GDK_WINDOWING_X11
   GdkDisplay *display = gtk_widget_get_display (GTK_WIDGET (self));
@@ -388,11 +388,11 @@ cw_window_realize (GtkWidget *widget)
   if (!self->refreshed)
     cw_window_refresh (self);
   GTK_WIDGET_CLASS (cw_window_parent_class)->realize (widget);
-  cw_window_update_frame_sync (self);
+  update_frame_sync (self);
 #ifdef GDK_WINDOWING_X11
   if (GDK_IS_X11_DISPLAY (gtk_widget_get_display (widget)))
     g_signal_connect_object (gdk_x11_display_get_screen (gtk_widget_get_display (widget)), "window-manager-changed",
-                             G_CALLBACK (cw_window_update_frame_sync), self, G_CONNECT_SWAPPED);
+                             G_CALLBACK (update_frame_sync), self, G_CONNECT_SWAPPED);
 #endif
   /* The window's icon is set once its first frame is on screen: on X11 GTK renders the
    * icon at several sizes for the window manager when it is set, and the SVG renderer it
@@ -413,7 +413,7 @@ cw_window_unrealize (GtkWidget *widget)
 #ifdef GDK_WINDOWING_X11
   if (GDK_IS_X11_DISPLAY (gtk_widget_get_display (widget)))
     g_signal_handlers_disconnect_by_func (gdk_x11_display_get_screen (gtk_widget_get_display (widget)),
-                                          cw_window_update_frame_sync, self);
+                                          update_frame_sync, self);
 #endif
   GTK_WIDGET_CLASS (cw_window_parent_class)->unrealize (widget);
 }
