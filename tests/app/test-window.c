@@ -579,6 +579,8 @@ test_dark_style (void)
 static void
 test_result_sheet (void)
 {
+  /* The texts below test the widget's layout only: their digits are made up and mean
+   * nothing chemically (no source needed; no result is checked here). */
   GtkWidget        *window = gtk_window_new ();
   GtkWidget        *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
   CwResultSheet    *sheet = CW_RESULT_SHEET (g_object_new (CW_TYPE_RESULT_SHEET, "title", "Terms", NULL));
@@ -651,6 +653,7 @@ test_result_sheet (void)
 static void
 test_steady_label (void)
 {
+  /* Layout test only: the digits in these texts are made up, not results. */
   GtkWidget     *window = gtk_window_new ();
   GtkWidget     *box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
   CwSteadyLabel *label = CW_STEADY_LABEL (cw_steady_label_new ());

@@ -7,6 +7,9 @@
 
 static CwData *data;
 
+/* Temperatures: 298.15 K is the standard temperature (25 °C) of thermochemical tables
+ * (IUPAC standard state convention, common practice). */
+
 /* Methylcyclohexane is about 95 % equatorial at 25 °C (A(Me) 1.74 kcal/mol: Booth & Everett,
  * J. Chem. Soc., Perkin Trans. 2 1980, 255; the 95 % figure is common practice, no source). */
 static void
