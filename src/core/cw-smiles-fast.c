@@ -534,6 +534,9 @@ cw_sm_read_fast (const CwSmIndex *index, CwSmGraph *g, const char *text, int len
         guint k = (guint) (sc.br_owner[b] - first);
         if (k >= CW_RING_SIZE)
           continue;
+        /* more groups than a ring holds: the general reader says what is wrong */
+        if (r->n_subs + tail >= CW_MAX_SUBS)
+          return 0;
         r->sub_group[r->n_subs] = cached_group (index, g, text, sc.br_lo[b], sc.br_hi[b], 0, &cyclohexyl);
         r->sub_ring[r->n_subs++] = k;
       }
