@@ -18,4 +18,8 @@ const CwGeometryData *cw_app_get_geometry (GError **error);
  * settings kept in memory). */
 GSettings *cw_app_settings_new (void);
 
+/* Keeps large freed blocks in the process's heap (glibc), where the next frame finds them
+ * already paged in; see cw-app-data.c. Called once, at start, before any window. */
+void cw_app_tune_memory (void);
+
 G_END_DECLS

@@ -3,6 +3,7 @@
 #include <glib/gi18n.h>
 #include <locale.h>
 
+#include "cw-app-data.h"
 #include "cw-application.h"
 
 /* Everything Chairwise shows is drawn with Cairo, so GL brings nothing but cost: on
@@ -55,6 +56,7 @@ main (int   argc,
 {
   g_autoptr (CwApplication) app = NULL;
 
+  cw_app_tune_memory ();
   choose_renderer ();
   choose_accessibility ();
   choose_session_bus ();

@@ -15,6 +15,7 @@
 #include <stdlib.h>
 #include <time.h>
 
+#include "cw-app-data.h"
 #include "cw-window-private.h"
 
 #define N_EDITS 200
@@ -187,7 +188,9 @@ main (int argc, char *argv[])
 
     g_setenv ("XDG_STATE_HOME", state, TRUE);
   }
-  /* As the program does at start (src/app/main.c): Cairo renderer, no GL context. */
+  /* As the program does at start (src/app/main.c): memory kept in the heap, Cairo
+   * renderer, no GL context. */
+  cw_app_tune_memory ();
   if (g_getenv ("GDK_DEBUG") == NULL && g_strcmp0 (g_getenv ("GSK_RENDERER"), "cairo") == 0)
     g_setenv ("GDK_DEBUG", "gl-disable", TRUE);
   if (!gtk_init_check ())
