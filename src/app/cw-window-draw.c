@@ -96,6 +96,33 @@ figure_scene (CwWindow              *self,
                                  self->an_valid ? &self->an : NULL, opt, width, height);
 }
 
+/* The worker's first figure loads fonts for it, which takes longer than a frame: once the
+ * window's first figures are on screen, the worker paints them too, and throws the images
+ * away, so that the first edit is as quick as the others. */
+static gboolean
+warm_up_cb (gpointer data)
+{
+  CwWindow *self = data;
+
+  self->warm_up_id = 0;
+  for (guint slot = 0; slot < G_N_ELEMENTS (self->figure_drawn); slot++)
+    {
+      static const CwFigure figs[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
+      GtkDrawingArea       *area = figure_area (self, figs[slot]);
+      int                   width = self->figure_drawn_width[slot], height = self->figure_drawn_height[slot];
+      CwRenderOptions       opt;
+      CwScene              *scene;
+
+      if (!self->figure_drawn_valid[slot] || width <= 0 || height <= 0)
+        continue;
+      cw_window_render_options (self, GTK_WIDGET (area), &opt);
+      scene = figure_scene (self, figs[slot], width, height, &opt);
+      if (scene != NULL)
+        cw_paint_job_warm_up (scene, opt.dark, width, height, gtk_widget_get_scale_factor (GTK_WIDGET (area)));
+    }
+  return G_SOURCE_REMOVE;
+}
+
 static void
 draw_figure (CwWindow       *self,
              GtkDrawingArea *area,
@@ -105,21 +132,42 @@ draw_figure (CwWindow       *self,
              int             height)
 {
   guint           slot = figure_slot (fig);
+  int             scale = gtk_widget_get_scale_factor (GTK_WIDGET (area));
   CwRenderOptions opt;
   CwScene        *scene;
 
   cw_window_render_options (self, GTK_WIDGET (area), &opt);
-  /* The scene laid out when the redraw was queued, if nothing has changed since. */
+  /* The scene laid out when the redraw was queued, if nothing has changed since: painted
+   * by then, or nearly, on the worker thread. */
   if (self->figure_pending[slot] != NULL && self->figure_pending_stamp[slot] == self->figure_stamp &&
       self->figure_pending_width[slot] == width && self->figure_pending_height[slot] == height &&
-      memcmp (&self->figure_pending_opt[slot], &opt, sizeof opt) == 0)
-    scene = g_steal_pointer (&self->figure_pending[slot]);
+      self->figure_pending_scale[slot] == scale && memcmp (&self->figure_pending_opt[slot], &opt, sizeof opt) == 0)
+    {
+      CwPaintJob      *job = g_steal_pointer (&self->figure_pending[slot]);
+      cairo_surface_t *image = cw_paint_job_wait (job);
+
+      scene = cw_paint_job_steal_scene (job);
+      if (image != NULL)
+        {
+          cairo_set_source_surface (cr, image, 0, 0);
+          cairo_paint (cr);
+        }
+      else
+        cw_render_figure_paint (cr, scene, opt.dark, width, height);
+      cw_paint_job_free (job);
+    }
   else
     {
-      g_clear_pointer (&self->figure_pending[slot], cw_scene_free);
+      g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
       scene = figure_scene (self, fig, width, height, &opt);
+      cw_render_figure_paint (cr, scene, opt.dark, width, height);
+      if (!self->warm_up_done && scene != NULL)
+        {
+          /* After this frame. */
+          self->warm_up_done = TRUE;
+          self->warm_up_id = g_idle_add (warm_up_cb, self);
+        }
     }
-  cw_render_figure_paint (cr, scene, opt.dark, width, height);
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
   g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
   self->figure_drawn[slot] = scene;
@@ -162,7 +210,7 @@ cw_window_queue_figures (CwWindow *self)
       CwRenderOptions opt;
       CwScene        *scene;
 
-      g_clear_pointer (&self->figure_pending[slot], cw_scene_free);
+      g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
       if (!self->figure_drawn_valid[slot] || !gtk_widget_get_mapped (GTK_WIDGET (area)) ||
           width != self->figure_drawn_width[slot] || height != self->figure_drawn_height[slot])
         {
@@ -177,13 +225,22 @@ cw_window_queue_figures (CwWindow *self)
           cw_scene_free (scene);
           continue;
         }
-      self->figure_pending[slot] = scene;
+      /* Painted on the worker thread while the other widgets are brought up to date. */
+      self->figure_pending_scale[slot] = gtk_widget_get_scale_factor (GTK_WIDGET (area));
+      self->figure_pending[slot] = cw_paint_job_start (scene, opt.dark, width, height, self->figure_pending_scale[slot]);
       self->figure_pending_opt[slot] = opt;
       self->figure_pending_width[slot] = width;
       self->figure_pending_height[slot] = height;
       self->figure_pending_stamp[slot] = self->figure_stamp;
       gtk_widget_queue_draw (GTK_WIDGET (area));
     }
+}
+
+/* Before the window goes away. */
+void
+cw_window_stop_figures (CwWindow *self)
+{
+  g_clear_handle_id (&self->warm_up_id, g_source_remove);
 }
 
 /* Forgets the figures as drawn: the next change redraws all three. */
@@ -193,7 +250,7 @@ cw_window_clear_figures (CwWindow *self)
   for (guint i = 0; i < G_N_ELEMENTS (self->figure_drawn); i++)
     {
       g_clear_pointer (&self->figure_drawn[i], cw_scene_free);
-      g_clear_pointer (&self->figure_pending[i], cw_scene_free);
+      g_clear_pointer (&self->figure_pending[i], cw_paint_job_free);
       self->figure_drawn_valid[i] = FALSE;
     }
 }
@@ -238,16 +295,22 @@ cw_window_save_screenshot (CwWindow   *self,
   g_autoptr (GdkPaintable) paintable = NULL;
   g_autoptr (GskRenderNode) node = NULL;
   g_autoptr (GdkTexture) texture = NULL;
-  GtkSnapshot *snapshot;
+  GtkSnapshot    *snapshot;
+  graphene_rect_t bounds;
 
   if (w <= 0 || h <= 0 || gtk_native_get_renderer (GTK_NATIVE (self)) == NULL)
     {
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window is not shown yet"));
       return FALSE;
     }
+  /* The paintable covers the window's shadow too, and scales what it draws to the size
+   * asked for: snapshot it at its own size and render the window's box, unscaled. */
+  if (!gtk_widget_compute_bounds (widget, widget, &bounds))
+    bounds = GRAPHENE_RECT_INIT (0, 0, w, h);
   paintable = gtk_widget_paintable_new (widget);
   snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  gdk_paintable_snapshot (paintable, snapshot, gdk_paintable_get_intrinsic_width (paintable),
+                          gdk_paintable_get_intrinsic_height (paintable));
   node = gtk_snapshot_free_to_node (snapshot);
   if (node == NULL)
     {
@@ -255,7 +318,7 @@ cw_window_save_screenshot (CwWindow   *self,
       return FALSE;
     }
   texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (self)), node,
-                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+                                         &GRAPHENE_RECT_INIT (-bounds.origin.x, -bounds.origin.y, w, h));
   if (!gdk_texture_save_to_png (texture, path))
     {
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("Could not write “%s”"), path);

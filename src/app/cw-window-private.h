@@ -4,6 +4,7 @@
 #include "cw-group-chooser.h"
 #include "cw-history.h"
 #include "cw-isomers.h"
+#include "cw-paint-job.h"
 #include "cw-reactivity.h"
 #include "cw-render.h"
 #include "cw-ring-canvas.h"
@@ -64,6 +65,10 @@ struct _CwWindow
   CwReactivity *reactivity; /* valid when reactivity_valid */
   CwIsomerSet  *isomers;    /* what the isomers page shows, NULL until it is shown */
 
+  /* the units, as in the settings (read_units in cw-window.c) */
+  CwEnergyUnit      energy_unit;
+  CwTemperatureUnit temperature_unit;
+
   /* the figures (chairs, profile, scan) as last drawn, so that a change that leaves a
    * figure as it was does not redraw it */
   CwScene *figure_drawn[3];
@@ -71,15 +76,18 @@ struct _CwWindow
   gboolean figure_drawn_dark[3];
   int      figure_drawn_width[3];
   int      figure_drawn_height[3];
-  /* a changed figure as laid out when its redraw was queued, drawn as it is unless
-   * something has changed since (figure_stamp counts changes of the document, analysis
-   * and pages) */
-  CwScene        *figure_pending[3];
+  /* a changed figure as laid out when its redraw was queued, and being painted on the
+   * worker thread meanwhile (the job holds the scene); drawn as it is unless something
+   * has changed since (figure_stamp counts changes of the document, analysis and pages) */
+  CwPaintJob     *figure_pending[3];
   CwRenderOptions figure_pending_opt[3];
   int             figure_pending_width[3];
   int             figure_pending_height[3];
+  int             figure_pending_scale[3];
   guint           figure_pending_stamp[3];
   guint           figure_stamp;
+  guint           warm_up_id; /* idle that warms the worker up, once */
+  gboolean        warm_up_done;
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */
@@ -135,6 +143,7 @@ gboolean cw_window_set_smiles (CwWindow   *self,
 /* cw-window-draw.c: the figures on screen (through the render layer). */
 void cw_window_queue_figures (CwWindow *self);
 void cw_window_clear_figures (CwWindow *self);
+void cw_window_stop_figures (CwWindow *self);
 void cw_window_draw_chairs_cb (GtkDrawingArea *area,
                                cairo_t        *cr,
                                int             width,

@@ -15,16 +15,26 @@ G_DEFINE_FINAL_TYPE (CwWindow, cw_window, GTK_TYPE_APPLICATION_WINDOW)
 
 /* ---- units and options ------------------------------------------------------------ */
 
+/* The units are read on every edit, many times: GSettings is asked once per change of the
+ * key (read_units, connected before anything else that reacts to the settings). */
+static void
+read_units (CwWindow *self)
+{
+  self->energy_unit = g_settings_get_enum (self->settings, "energy-unit") == 1 ? CW_UNIT_KJ : CW_UNIT_KCAL;
+  self->temperature_unit =
+    g_settings_get_enum (self->settings, "temperature-unit") == 1 ? CW_TUNIT_CELSIUS : CW_TUNIT_KELVIN;
+}
+
 CwEnergyUnit
 cw_window_get_energy_unit (CwWindow *self)
 {
-  return g_settings_get_enum (self->settings, "energy-unit") == 1 ? CW_UNIT_KJ : CW_UNIT_KCAL;
+  return self->energy_unit;
 }
 
 CwTemperatureUnit
 cw_window_get_temperature_unit (CwWindow *self)
 {
-  return g_settings_get_enum (self->settings, "temperature-unit") == 1 ? CW_TUNIT_CELSIUS : CW_TUNIT_KELVIN;
+  return self->temperature_unit;
 }
 
 /* ---- refresh after every change ----------------------------------------------------- */
@@ -424,6 +434,7 @@ cw_window_dispose (GObject *object)
   CwWindow *self = CW_WINDOW (object);
 
   g_clear_handle_id (&self->autosave_id, g_source_remove);
+  cw_window_stop_figures (self);
   if (self->pending_dialog != NULL)
     gtk_window_destroy (GTK_WINDOW (g_steal_pointer (&self->pending_dialog)));
   gtk_widget_dispose_template (GTK_WIDGET (self), CW_TYPE_WINDOW);
@@ -538,6 +549,10 @@ cw_window_init (CwWindow *self)
     g_error ("Cannot load the group tables: %s", error->message);
 
   self->settings = cw_app_settings_new ();
+  read_units (self);
+  g_signal_connect_object (self->settings, "changed::energy-unit", G_CALLBACK (read_units), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (self->settings, "changed::temperature-unit", G_CALLBACK (read_units), self,
+                           G_CONNECT_SWAPPED);
   self->history = cw_history_new (200);
   self->doc = cw_document_new ();
   cw_document_set_temperature (self->doc, g_settings_get_double (self->settings, "default-temperature"));

@@ -1,0 +1,155 @@
+/* Figures painted on the worker thread (what the window shows after an edit) look exactly
+ * as figures painted where they are asked for, and jobs can be dropped at any point. */
+#include "config.h"
+
+#include "cw-paint-job.h"
+#include "render-test-util.h"
+
+static const char *const spec = "1u=methoxycarbonyl 2d=bromo 4u=ethyl";
+
+static CwScene *
+build (const CwData *data, const CwMolecule *mol, CwFigure fig, int width, int height)
+{
+  CwAnalysis      an;
+  CwRenderOptions opt;
+
+  rt_analyze (data, mol, 298.15, &an);
+  cw_render_options_init (&opt);
+  return cw_render_figure_scene (fig, data, mol, &an, &opt, width, height);
+}
+
+/* As the window's own drawing reaches the screen: recorded, then played into an image. */
+static cairo_surface_t *
+paint_here (const CwScene *scene, gboolean dark, int width, int height, int scale)
+{
+  cairo_rectangle_t box = { 0, 0, width, height };
+  cairo_surface_t  *recording = cairo_recording_surface_create (CAIRO_CONTENT_COLOR_ALPHA, &box);
+  cairo_surface_t *image = cairo_image_surface_create (CAIRO_FORMAT_RGB24, width * scale, height * scale);
+  cairo_t         *cr = cairo_create (recording);
+
+  cw_render_figure_paint (cr, scene, dark, width, height);
+  cairo_destroy (cr);
+  cairo_surface_set_device_scale (image, scale, scale);
+  cr = cairo_create (image);
+  cairo_set_source_surface (cr, recording, 0, 0);
+  cairo_paint (cr);
+  cairo_destroy (cr);
+  cairo_surface_destroy (recording);
+  cairo_surface_flush (image);
+  return image;
+}
+
+/* Number of pixels that differ. */
+static guint
+n_different (cairo_surface_t *a, cairo_surface_t *b)
+{
+  int    w = cairo_image_surface_get_width (a), h = cairo_image_surface_get_height (a);
+  int    sa = cairo_image_surface_get_stride (a), sb = cairo_image_surface_get_stride (b);
+  guint  n = 0;
+  guchar *pa = cairo_image_surface_get_data (a), *pb = cairo_image_surface_get_data (b);
+
+  g_assert_cmpint (w, ==, cairo_image_surface_get_width (b));
+  g_assert_cmpint (h, ==, cairo_image_surface_get_height (b));
+  for (int y = 0; y < h; y++)
+    for (int x = 0; x < w; x++)
+      {
+        guint32 u = ((guint32 *) (pa + y * sa))[x] & 0xffffff, v = ((guint32 *) (pb + y * sb))[x] & 0xffffff;
+
+        n += u != v;
+      }
+  return n;
+}
+
+/* Fraction of pixels that are not the figure's background (the top-left pixel). */
+static double
+busy (cairo_surface_t *image)
+{
+  int      w = cairo_image_surface_get_width (image), h = cairo_image_surface_get_height (image);
+  int      stride = cairo_image_surface_get_stride (image);
+  guchar  *p = cairo_image_surface_get_data (image);
+  guint32  bg = ((guint32 *) p)[0] & 0xffffff;
+  guint    n = 0;
+
+  for (int y = 0; y < h; y++)
+    for (int x = 0; x < w; x++)
+      n += (((guint32 *) (p + y * stride))[x] & 0xffffff) != bg;
+  return (double) n / (w * h);
+}
+
+static void
+test_same_pixels (void)
+{
+  g_autoptr (CwData) data = rt_load_data ();
+  g_autoptr (CwMolecule) mol = rt_ring (data, spec);
+  static const struct
+  {
+    CwFigure fig;
+    int      width, height, scale;
+    gboolean dark;
+  } cases[] = {
+    { CW_FIGURE_CHAIRS, 765, 230, 1, FALSE },
+    { CW_FIGURE_PROFILE, 765, 120, 1, FALSE },
+    { CW_FIGURE_SCAN, 500, 200, 1, TRUE },
+    { CW_FIGURE_CHAIRS, 400, 150, 2, TRUE },
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      CwScene         *scene = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
+      g_autoptr (CwScene) again = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
+      g_autoptr (CwPaintJob) job = cw_paint_job_start (scene, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
+      cairo_surface_t *image = cw_paint_job_wait (job);
+      cairo_surface_t *here;
+      g_autoptr (CwScene) back = NULL;
+
+      g_assert_nonnull (image);
+      g_assert_cmpint (cairo_image_surface_get_width (image), ==, cases[i].width * cases[i].scale);
+      g_assert_cmpint (cairo_image_surface_get_height (image), ==, cases[i].height * cases[i].scale);
+      /* A real drawing, not an empty box. */
+      g_assert_cmpfloat (busy (image), >, 0.01);
+      here = paint_here (again, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
+      g_assert_cmpuint (n_different (image, here), ==, 0);
+      cairo_surface_destroy (here);
+      /* The scene comes back as it went. */
+      back = cw_paint_job_steal_scene (job);
+      g_assert_true (cw_scene_equal (back, again));
+    }
+}
+
+/* Jobs dropped before, while and after they run; the ones kept still finish. */
+static void
+test_drop (void)
+{
+  g_autoptr (CwData) data = rt_load_data ();
+  g_autoptr (CwMolecule) mol = rt_ring (data, spec);
+  CwPaintJob *kept[4];
+
+  for (int round = 0; round < 20; round++)
+    {
+      for (int k = 0; k < 4; k++)
+        {
+          CwPaintJob *dropped = cw_paint_job_start (build (data, mol, CW_FIGURE_PROFILE, 300, 100), FALSE, 300, 100, 1);
+
+          kept[k] = cw_paint_job_start (build (data, mol, CW_FIGURE_CHAIRS, 300, 120), FALSE, 300, 120, 1);
+          if (k % 2 == 0)
+            g_usleep (200);
+          cw_paint_job_free (dropped);
+        }
+      cw_paint_job_warm_up (build (data, mol, CW_FIGURE_SCAN, 200, 100), FALSE, 200, 100, 1);
+      for (int k = 0; k < 4; k++)
+        {
+          g_assert_nonnull (cw_paint_job_wait (kept[k]));
+          cw_paint_job_free (kept[k]);
+        }
+    }
+  cw_paint_job_free (NULL);
+}
+
+int
+main (int argc, char *argv[])
+{
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/render/paint-job/same-pixels", test_same_pixels);
+  g_test_add_func ("/render/paint-job/drop", test_drop);
+  return g_test_run ();
+}
