@@ -3,6 +3,7 @@
 #include "cw-result-sheet.h"
 
 #include <glib/gi18n.h>
+#include <string.h>
 
 #include "cw-copy-menu.h"
 
@@ -25,40 +26,49 @@
 #define TITLE_SCALE 1.1
 #define SHRINK_DELAY_MS 500
 
+/* A text laid out once and drawn once, shared by every cell that shows it: when a term
+ * comes or goes, the rows below it shift, and their texts are found again in the sheet's
+ * pools instead of being laid out and drawn anew. */
 typedef struct
 {
-  char        *text;
-  PangoLayout *layout;
-  int          width; /* logical size in pixels, before any shortening */
-  int          height;
-  int          layout_width; /* width set on the layout (Pango units), -1 for none */
-} Cell;
+  int            ref;
+  char          *text;
+  PangoLayout   *layout;
+  int            width; /* logical size in pixels, on one line, before any shortening */
+  int            height;
+  int            layout_width;   /* width set on the layout (Pango units), -1 for none */
+  int            limited_height; /* height at that width */
+  GskRenderNode *node;           /* the layout drawn in node_color; NULL until drawn */
+  GdkRGBA        node_color;
+} Text;
+
+/* Texts of each column, plain and heading, and of the flags. */
+#define N_POOLS (2 * N_COLS + 1)
+#define FLAG_POOL (2 * N_COLS)
+#define POOL_KEEP 256 /* texts kept unused before the unused ones are dropped */
 
 typedef struct
 {
-  Cell     cells[N_COLS];
+  Text    *cells[N_COLS];
   gboolean heading;
   int      height;
 } Row;
 
 typedef struct
 {
-  char        *text;
-  gboolean     info;
-  PangoLayout *layout;
-  int          line_width; /* the text on one line, pixels */
-  int          line_height;
-  int          layout_width; /* width set on the layout (Pango units), -1 for none */
+  Text    *text;
+  gboolean info;
 } Flag;
 
 struct _CwResultSheet
 {
   GtkWidget parent_instance;
 
-  GArray      *rows; /* Row; the first n_rows are shown, the others keep their layouts */
+  GArray      *rows; /* Row, n_rows of them */
   guint        n_rows;
-  GArray      *flags; /* Flag, likewise */
+  GArray      *flags; /* Flag, n_flags of them */
   guint        n_flags;
+  GHashTable  *pools[N_POOLS]; /* text → Text */
   char        *title;
   PangoLayout *title_layout;
   int          title_width;
@@ -96,44 +106,121 @@ is_numeric (guint col)
 }
 
 static void
-cell_set_attributes (Cell    *cell,
-                     guint    col,
-                     gboolean heading)
+text_unref (Text *text)
 {
-  PangoAttrList *attrs = pango_attr_list_new ();
-
-  if (heading)
-    pango_attr_list_insert (attrs, pango_attr_weight_new (PANGO_WEIGHT_BOLD));
-  if (is_numeric (col))
-    pango_attr_list_insert (attrs, pango_attr_font_features_new ("tnum"));
-  pango_layout_set_attributes (cell->layout, attrs);
-  pango_attr_list_unref (attrs);
+  if (text == NULL || --text->ref > 0)
+    return;
+  g_free (text->text);
+  g_clear_object (&text->layout);
+  g_clear_pointer (&text->node, gsk_render_node_unref);
+  g_free (text);
 }
 
 static void
-layout_set_width (PangoLayout *layout,
-                  int         *current,
-                  int          width)
+text_measure (Text *text)
 {
-  if (width != *current)
+  pango_layout_set_width (text->layout, -1);
+  text->layout_width = -1;
+  pango_layout_get_pixel_size (text->layout, &text->width, &text->height);
+  text->limited_height = text->height;
+  g_clear_pointer (&text->node, gsk_render_node_unref);
+}
+
+/* Lays the text out width wide (Pango units, -1 for no limit), unless it already is. */
+static void
+text_set_width (Text *text,
+                int   width)
+{
+  if (width == text->layout_width)
+    return;
+  pango_layout_set_width (text->layout, width);
+  text->layout_width = width;
+  pango_layout_get_pixel_size (text->layout, NULL, &text->limited_height);
+  g_clear_pointer (&text->node, gsk_render_node_unref);
+}
+
+static void
+text_set_alignment (Text          *text,
+                    PangoAlignment alignment)
+{
+  if (pango_layout_get_alignment (text->layout) == alignment)
+    return;
+  pango_layout_set_alignment (text->layout, alignment);
+  g_clear_pointer (&text->node, gsk_render_node_unref);
+}
+
+/* The text from the pool (a new reference), laid out when it is not there yet. */
+static Text *
+text_get (CwResultSheet *self,
+          guint          pool,
+          const char    *string)
+{
+  Text          *text = g_hash_table_lookup (self->pools[pool], string);
+  PangoAttrList *attrs;
+
+  if (text != NULL)
     {
-      pango_layout_set_width (layout, width);
-      *current = width;
+      text->ref++;
+      return text;
     }
+  if (g_hash_table_size (self->pools[pool]) >= POOL_KEEP)
+    {
+      GHashTableIter iter;
+      gpointer       value;
+
+      g_hash_table_iter_init (&iter, self->pools[pool]);
+      while (g_hash_table_iter_next (&iter, NULL, &value))
+        if (((Text *) value)->ref == 1)
+          g_hash_table_iter_remove (&iter);
+    }
+  text = g_new0 (Text, 1);
+  text->ref = 2; /* the pool's and the caller's */
+  text->text = g_strdup (string);
+  text->layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), string);
+  attrs = pango_attr_list_new ();
+  if (pool == FLAG_POOL)
+    pango_layout_set_wrap (text->layout, PANGO_WRAP_WORD_CHAR);
+  else
+    {
+      guint col = pool % N_COLS;
+
+      if (pool >= N_COLS)
+        pango_attr_list_insert (attrs, pango_attr_weight_new (PANGO_WEIGHT_BOLD));
+      if (is_numeric (col))
+        pango_attr_list_insert (attrs, pango_attr_font_features_new ("tnum"));
+      if (col == SOURCE_COL)
+        pango_layout_set_ellipsize (text->layout, PANGO_ELLIPSIZE_END);
+    }
+  pango_layout_set_attributes (text->layout, attrs);
+  pango_attr_list_unref (attrs);
+  text_measure (text);
+  g_hash_table_insert (self->pools[pool], text->text, text);
+  return text;
 }
 
+/* Appends the text, drawn once and kept. */
 static void
-cell_measure (Cell *cell)
+text_snapshot (Text          *text,
+               GtkSnapshot   *snapshot,
+               int            x,
+               int            y,
+               const GdkRGBA *color)
 {
-  layout_set_width (cell->layout, &cell->layout_width, -1);
-  pango_layout_get_pixel_size (cell->layout, &cell->width, &cell->height);
-}
+  if (text->node == NULL || !gdk_rgba_equal (&text->node_color, color))
+    {
+      GtkSnapshot *s = gtk_snapshot_new ();
 
-static void
-flag_measure (Flag *flag)
-{
-  layout_set_width (flag->layout, &flag->layout_width, -1);
-  pango_layout_get_pixel_size (flag->layout, &flag->line_width, &flag->line_height);
+      g_clear_pointer (&text->node, gsk_render_node_unref);
+      gtk_snapshot_append_layout (s, text->layout, color);
+      text->node = gtk_snapshot_free_to_node (s);
+      text->node_color = *color;
+    }
+  if (text->node == NULL)
+    return;
+  gtk_snapshot_save (snapshot);
+  gtk_snapshot_translate (snapshot, &GRAPHENE_POINT_INIT (x, y));
+  gtk_snapshot_append_node (snapshot, text->node);
+  gtk_snapshot_restore (snapshot);
 }
 
 static void
@@ -155,10 +242,10 @@ update_table_metrics (CwResultSheet *self)
       row->height = 0;
       for (guint c = 0; c < N_COLS; c++)
         {
-          int width = c == SOURCE_COL ? MIN (row->cells[c].width, self->source_max) : row->cells[c].width;
+          int width = c == SOURCE_COL ? MIN (row->cells[c]->width, self->source_max) : row->cells[c]->width;
 
           self->col_width[c] = MAX (self->col_width[c], width);
-          row->height = MAX (row->height, row->cells[c].height);
+          row->height = MAX (row->height, row->cells[c]->height);
         }
       height += row->height + (r > 0 ? ROW_SPACING : 0);
     }
@@ -191,7 +278,7 @@ update_widths (CwResultSheet *self)
       nat = MAX (nat, x[SOURCE_COL] + self->col_width[SOURCE_COL]);
     }
   for (guint i = 0; i < self->n_flags; i++)
-    nat = MAX (nat, 2 * FLAG_PAD_X + ICON_SIZE + ICON_GAP + g_array_index (self->flags, Flag, i).line_width);
+    nat = MAX (nat, 2 * FLAG_PAD_X + ICON_SIZE + ICON_GAP + g_array_index (self->flags, Flag, i).text->width);
   nat = MAX (nat, min);
   changed = min > self->min_width || nat > self->nat_width;
   self->min_width = MAX (self->min_width, min);
@@ -217,23 +304,17 @@ check_context (CwResultSheet *self)
   self->char_width = PANGO_PIXELS (char_width);
   self->source_max = PANGO_PIXELS (char_width * SOURCE_MAX_CHARS);
   self->source_min = PANGO_PIXELS (char_width * SOURCE_MIN_CHARS);
-  for (guint r = 0; r < self->rows->len; r++)
-    for (guint c = 0; c < N_COLS; c++)
-      {
-        Cell *cell = &g_array_index (self->rows, Row, r).cells[c];
-
-        if (cell->layout != NULL)
-          {
-            pango_layout_context_changed (cell->layout);
-            cell_measure (cell);
-          }
-      }
-  for (guint i = 0; i < self->flags->len; i++)
+  for (guint i = 0; i < N_POOLS; i++)
     {
-      Flag *flag = &g_array_index (self->flags, Flag, i);
+      GHashTableIter iter;
+      gpointer       value;
 
-      pango_layout_context_changed (flag->layout);
-      flag_measure (flag);
+      g_hash_table_iter_init (&iter, self->pools[i]);
+      while (g_hash_table_iter_next (&iter, NULL, &value))
+        {
+          pango_layout_context_changed (((Text *) value)->layout);
+          text_measure (value);
+        }
     }
   pango_layout_context_changed (self->title_layout);
   title_measure (self);
@@ -255,16 +336,10 @@ static int
 flag_height (Flag *flag,
              int   width)
 {
-  int avail = flag_text_width (width), height = flag->line_height;
+  int avail = flag_text_width (width);
 
-  if (flag->line_width > avail)
-    {
-      layout_set_width (flag->layout, &flag->layout_width, avail * PANGO_SCALE);
-      pango_layout_get_pixel_size (flag->layout, NULL, &height);
-    }
-  else
-    layout_set_width (flag->layout, &flag->layout_width, -1);
-  return 2 * FLAG_PAD_Y + MAX (ICON_SIZE, height);
+  text_set_width (flag->text, flag->text->width > avail ? avail * PANGO_SCALE : -1);
+  return 2 * FLAG_PAD_Y + MAX (ICON_SIZE, flag->text->limited_height);
 }
 
 /* Height of everything above the table, at a width. */
@@ -298,7 +373,7 @@ update_text (CwResultSheet *self)
       Flag *flag = &g_array_index (self->flags, Flag, i);
 
       /* TRANSLATORS: a flag as copied text: "Note: …" or "Warning: …" */
-      g_string_append_printf (text, flag->info ? _("Note: %s") : _("Warning: %s"), flag->text);
+      g_string_append_printf (text, flag->info ? _("Note: %s") : _("Warning: %s"), flag->text->text);
       g_string_append_c (text, '\n');
     }
   if (self->title != NULL && *self->title != '\0')
@@ -309,7 +384,7 @@ update_text (CwResultSheet *self)
 
       for (guint c = 0; c < N_COLS; c++)
         {
-          g_string_append (text, row->cells[c].text);
+          g_string_append (text, row->cells[c]->text);
           g_string_append_c (text, c + 1 < N_COLS ? '\t' : '\n');
         }
     }
@@ -325,26 +400,19 @@ set_flags (CwResultSheet     *self,
 {
   gboolean changed = n_flags != self->n_flags;
 
-  if (self->flags->len < n_flags)
-    g_array_set_size (self->flags, n_flags);
+  for (guint i = n_flags; i < self->n_flags; i++)
+    g_clear_pointer (&g_array_index (self->flags, Flag, i).text, text_unref);
+  g_array_set_size (self->flags, n_flags);
   for (guint i = 0; i < n_flags; i++)
     {
       Flag       *flag = &g_array_index (self->flags, Flag, i);
       const char *text = flags[i].text != NULL ? flags[i].text : "";
 
-      if (flag->layout == NULL)
-        {
-          flag->layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), NULL);
-          pango_layout_set_wrap (flag->layout, PANGO_WRAP_WORD_CHAR);
-          flag->layout_width = -1;
-        }
-      else if (g_strcmp0 (flag->text, text) == 0 && flag->info == (flags[i].info != FALSE))
+      if (flag->text != NULL && strcmp (flag->text->text, text) == 0 && flag->info == (flags[i].info != FALSE))
         continue;
       flag->info = flags[i].info != FALSE;
-      g_free (flag->text);
-      flag->text = g_strdup (text);
-      pango_layout_set_text (flag->layout, text, -1);
-      flag_measure (flag);
+      text_unref (flag->text);
+      flag->text = text_get (self, FLAG_POOL, text);
       changed = TRUE;
     }
   self->n_flags = n_flags;
@@ -358,8 +426,10 @@ set_rows (CwResultSheet    *self,
 {
   gboolean changed = n_rows != self->n_rows;
 
-  if (self->rows->len < n_rows)
-    g_array_set_size (self->rows, n_rows);
+  for (guint r = n_rows; r < self->n_rows; r++)
+    for (guint c = 0; c < N_COLS; c++)
+      g_clear_pointer (&g_array_index (self->rows, Row, r).cells[c], text_unref);
+  g_array_set_size (self->rows, n_rows);
   for (guint r = 0; r < n_rows; r++)
     {
       Row     *row = &g_array_index (self->rows, Row, r);
@@ -367,25 +437,12 @@ set_rows (CwResultSheet    *self,
 
       for (guint c = 0; c < N_COLS; c++)
         {
-          Cell       *cell = &row->cells[c];
           const char *text = rows[r].cells[c] != NULL ? rows[r].cells[c] : "";
 
-          if (cell->layout == NULL)
-            {
-              cell->layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), NULL);
-              cell->layout_width = -1;
-              if (c == SOURCE_COL)
-                pango_layout_set_ellipsize (cell->layout, PANGO_ELLIPSIZE_END);
-              cell_set_attributes (cell, c, heading);
-            }
-          else if (heading == row->heading && g_strcmp0 (cell->text, text) == 0)
+          if (row->cells[c] != NULL && heading == row->heading && strcmp (row->cells[c]->text, text) == 0)
             continue;
-          else if (heading != row->heading)
-            cell_set_attributes (cell, c, heading);
-          g_free (cell->text);
-          cell->text = g_strdup (text);
-          pango_layout_set_text (cell->layout, text, -1);
-          cell_measure (cell);
+          text_unref (row->cells[c]);
+          row->cells[c] = text_get (self, heading ? N_COLS + c : c, text);
           changed = TRUE;
         }
       row->heading = heading;
@@ -485,7 +542,7 @@ cw_result_sheet_get_cell (CwResultSheet *self,
   g_return_val_if_fail (CW_IS_RESULT_SHEET (self), NULL);
   if (row >= self->n_rows || column >= N_COLS)
     return NULL;
-  return g_array_index (self->rows, Row, row).cells[column].text;
+  return g_array_index (self->rows, Row, row).cells[column]->text;
 }
 
 const char *
@@ -501,7 +558,7 @@ cw_result_sheet_get_flag (CwResultSheet *self,
   flag = &g_array_index (self->flags, Flag, index);
   if (info != NULL)
     *info = flag->info;
-  return flag->text;
+  return flag->text->text;
 }
 
 const char *
@@ -608,12 +665,8 @@ snapshot_flag (CwResultSheet *self,
   gtk_snapshot_restore (snapshot);
   g_object_unref (icon);
 
-  if (rtl)
-    pango_layout_set_alignment (flag->layout, PANGO_ALIGN_RIGHT);
-  gtk_snapshot_save (snapshot);
-  gtk_snapshot_translate (snapshot, &GRAPHENE_POINT_INIT (text_x, y + FLAG_PAD_Y));
-  gtk_snapshot_append_layout (snapshot, flag->layout, fg);
-  gtk_snapshot_restore (snapshot);
+  text_set_alignment (flag->text, rtl ? PANGO_ALIGN_RIGHT : PANGO_ALIGN_LEFT);
+  text_snapshot (flag->text, snapshot, text_x, y + FLAG_PAD_Y, fg);
 }
 
 static void
@@ -663,26 +716,23 @@ cw_result_sheet_snapshot (GtkWidget   *widget,
 
       for (guint c = 0; c < N_COLS; c++)
         {
-          Cell *cell = &row->cells[c];
+          Text *cell = row->cells[c];
           int   cx = x[c], cw = cell->width;
 
-          if (cell->text == NULL || *cell->text == '\0')
+          if (*cell->text == '\0')
             continue;
           if (c == SOURCE_COL)
             {
               int avail = MAX (width - x[c], 0);
 
-              layout_set_width (cell->layout, &cell->layout_width, cell->width > avail ? avail * PANGO_SCALE : -1);
+              text_set_width (cell, cell->width > avail ? avail * PANGO_SCALE : -1);
               cw = MIN (cell->width, avail);
             }
           else if (is_numeric (c))
             cx += self->col_width[c] - cell->width;
           if (rtl)
             cx = width - cx - cw;
-          gtk_snapshot_save (snapshot);
-          gtk_snapshot_translate (snapshot, &GRAPHENE_POINT_INIT (cx, y));
-          gtk_snapshot_append_layout (snapshot, cell->layout, c == SOURCE_COL && !row->heading ? &dim : &color);
-          gtk_snapshot_restore (snapshot);
+          text_snapshot (cell, snapshot, cx, y, c == SOURCE_COL && !row->heading ? &dim : &color);
         }
       y += row->height + ROW_SPACING;
     }
@@ -707,9 +757,9 @@ cw_result_sheet_query_tooltip (GtkWidget  *widget,
 
       if (py >= y && py < y + row->height + ROW_SPACING)
         {
-          const char *source = row->cells[SOURCE_COL].text;
+          const char *source = row->cells[SOURCE_COL]->text;
 
-          if (row->heading || source == NULL || *source == '\0')
+          if (row->heading || *source == '\0')
             return FALSE;
           gtk_tooltip_set_text (tooltip, source);
           return TRUE;
@@ -803,21 +853,13 @@ cw_result_sheet_finalize (GObject *object)
 
   for (guint r = 0; r < self->rows->len; r++)
     for (guint c = 0; c < N_COLS; c++)
-      {
-        Cell *cell = &g_array_index (self->rows, Row, r).cells[c];
-
-        g_free (cell->text);
-        g_clear_object (&cell->layout);
-      }
+      text_unref (g_array_index (self->rows, Row, r).cells[c]);
   for (guint i = 0; i < self->flags->len; i++)
-    {
-      Flag *flag = &g_array_index (self->flags, Flag, i);
-
-      g_free (flag->text);
-      g_clear_object (&flag->layout);
-    }
+    text_unref (g_array_index (self->flags, Flag, i).text);
   g_array_unref (self->rows);
   g_array_unref (self->flags);
+  for (guint i = 0; i < N_POOLS; i++)
+    g_hash_table_unref (self->pools[i]);
   g_clear_object (&self->title_layout);
   g_free (self->title);
   g_free (self->text);
@@ -855,6 +897,8 @@ cw_result_sheet_init (CwResultSheet *self)
 
   self->rows = g_array_new (FALSE, TRUE, sizeof (Row));
   self->flags = g_array_new (FALSE, TRUE, sizeof (Flag));
+  for (guint i = 0; i < N_POOLS; i++)
+    self->pools[i] = g_hash_table_new_full (g_str_hash, g_str_equal, NULL, (GDestroyNotify) text_unref);
   self->room_width = -1;
   self->title_layout = gtk_widget_create_pango_layout (GTK_WIDGET (self), NULL);
   pango_attr_list_insert (attrs, pango_attr_weight_new (PANGO_WEIGHT_BOLD));
