@@ -151,6 +151,7 @@ draw_figure (CwWindow       *self,
         {
           cairo_set_source_surface (cr, image, 0, 0);
           cairo_paint (cr);
+          self->n_worker_figures++;
         }
       else
         cw_render_figure_paint (cr, scene, opt.dark, width, height);

@@ -86,7 +86,8 @@ struct _CwWindow
   int             figure_pending_scale[3];
   guint           figure_pending_stamp[3];
   guint           figure_stamp;
-  guint           warm_up_id; /* idle that warms the worker up, once */
+  guint           n_worker_figures; /* figures drawn from the worker's image (for tests) */
+  guint           warm_up_id;       /* idle that warms the worker up, once */
   gboolean        warm_up_done;
 
   /* state */

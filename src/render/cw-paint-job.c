@@ -39,30 +39,7 @@ paint (gpointer data,
   cairo_surface_t *image = NULL;
 
   if (!g_atomic_int_get (&job->dropped))
-    {
-      cairo_rectangle_t box = { 0, 0, job->width, job->height };
-      cairo_surface_t  *recording = cairo_recording_surface_create (CAIRO_CONTENT_COLOR_ALPHA, &box);
-      cairo_t          *cr = cairo_create (recording);
-
-      /* Recorded first, then played into the image, as GTK plays a window's drawing onto
-       * the screen: drawn straight into an image, text would be placed on whole pixels
-       * (Cairo's default for image surfaces), and would look different from the figure
-       * drawn by the window itself. */
-      cw_render_figure_paint (cr, job->scene, job->dark, job->width, job->height);
-      cairo_destroy (cr);
-      /* Opaque: the figure paints its own background over the whole box, and an image
-       * without alpha is copied onto the screen without blending. */
-      image = cairo_image_surface_create (CAIRO_FORMAT_RGB24, job->width * job->scale, job->height * job->scale);
-      cairo_surface_set_device_scale (image, job->scale, job->scale);
-      cr = cairo_create (image);
-      cairo_set_source_surface (cr, recording, 0, 0);
-      cairo_paint (cr);
-      cairo_destroy (cr);
-      cairo_surface_destroy (recording);
-      cairo_surface_flush (image);
-      if (cairo_surface_status (image) != CAIRO_STATUS_SUCCESS)
-        g_clear_pointer (&image, cairo_surface_destroy);
-    }
+    image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
   g_mutex_lock (&job->lock);
   job->image = image;
   job->done = TRUE;

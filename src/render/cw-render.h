@@ -58,6 +58,9 @@ void        cw_render_figure (cairo_t *cr, CwFigure fig, const CwData *data, con
 CwScene    *cw_render_figure_scene (CwFigure fig, const CwData *data, const CwMolecule *mol,
                                     const CwAnalysis *an, const CwRenderOptions *opt, double width, double height);
 void        cw_render_figure_paint (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height);
+/* The figure painted into a new opaque image of width x height units at scale pixels per unit,
+ * looking as the same figure painted by a window on screen; NULL when Cairo fails. */
+cairo_surface_t *cw_render_figure_image (const CwScene *scene, gboolean dark, int width, int height, int scale);
 /* Format from the extension (.png, .svg, .pdf); atomic: temporary file, then rename. dpi is used
  * for PNG only. Always on white. */
 gboolean    cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc,

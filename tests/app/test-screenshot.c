@@ -91,11 +91,90 @@ test_screenshot_not_blank (void)
   gtk_window_destroy (GTK_WINDOW (win));
 }
 
+static guint32 *
+window_pixels (CwWindow *win,
+               int      *w,
+               int      *h)
+{
+  g_autofree char *path = app_test_tmp_path ("pixels.png");
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  guint32 *px;
+
+  g_assert_true (cw_window_save_screenshot (win, path, &error));
+  g_assert_no_error (error);
+  texture = gdk_texture_new_from_filename (path, &error);
+  g_assert_no_error (error);
+  *w = gdk_texture_get_width (texture);
+  *h = gdk_texture_get_height (texture);
+  px = g_new (guint32, (gsize) *w * *h);
+  gdk_texture_download (texture, (guchar *) px, (gsize) *w * 4);
+  return px;
+}
+
+/* After an edit the changed figures are painted on a worker thread and copied onto the
+ * screen; the window looks exactly as when it paints them itself. */
+static void
+test_worker_figures_same_pixels (void)
+{
+  CwWindow        *win = g_object_new (CW_TYPE_WINDOW, NULL);
+  g_autofree char *demo = g_build_filename (cw_data_find_dir (), "demo.json", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (demo);
+  g_autoptr (GError) error = NULL;
+  g_autofree guint32 *from_worker = NULL, *from_window = NULL;
+  int                 w1, h1, w2, h2;
+  guint               n, differ = 0;
+
+  g_assert_true (cw_window_open_file (win, file, &error));
+  g_assert_no_error (error);
+  gtk_window_set_default_size (GTK_WINDOW (win), 1100, 760);
+  gtk_window_present (GTK_WINDOW (win));
+  app_test_wait_mapped (GTK_WIDGET (win));
+
+  n = win->n_worker_figures;
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 3, "up", "bromo");
+  /* Past the table's giving back room (half a second), so the figures stay where they are. */
+  app_test_pump (800, NULL);
+  /* The chairs and the energy profile changed, and came from the worker. */
+  g_assert_cmpuint (win->n_worker_figures, >=, n + 2);
+  from_worker = window_pixels (win, &w1, &h1);
+
+  /* The same figures painted by the window itself. */
+  n = win->n_worker_figures;
+  cw_window_clear_figures (win);
+  gtk_widget_queue_draw (GTK_WIDGET (win->chairs_area));
+  gtk_widget_queue_draw (GTK_WIDGET (win->profile_area));
+  app_test_pump (300, NULL);
+  g_assert_cmpuint (win->n_worker_figures, ==, n);
+  from_window = window_pixels (win, &w2, &h2);
+
+  g_assert_cmpint (w1, ==, w2);
+  g_assert_cmpint (h1, ==, h2);
+  /* The two figures' boxes (the rest of the window may change meanwhile: a blinking cursor,
+   * the table giving back room). */
+  for (guint f = 0; f < 2; f++)
+    {
+      GtkWidget      *area = GTK_WIDGET (f == 0 ? win->chairs_area : win->profile_area);
+      graphene_rect_t b;
+
+      g_assert_true (gtk_widget_compute_bounds (area, GTK_WIDGET (win), &b));
+      g_assert_cmpfloat (b.size.width * b.size.height, >, 10000);
+      for (int y = (int) b.origin.y; y < (int) (b.origin.y + b.size.height) && y < h1; y++)
+        for (int x = (int) b.origin.x; x < (int) (b.origin.x + b.size.width) && x < w1; x++)
+          differ += from_worker[(gsize) y * w1 + x] != from_window[(gsize) y * w1 + x];
+    }
+  g_assert_cmpuint (differ, ==, 0);
+
+  win->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (win));
+}
+
 int
 main (int argc, char *argv[])
 {
   if (!app_test_init (&argc, &argv))
     return 0;
   g_test_add_func ("/app/screenshot/not-blank", test_screenshot_not_blank);
+  g_test_add_func ("/app/screenshot/worker-figures", test_worker_figures_same_pixels);
   return g_test_run ();
 }
