@@ -226,6 +226,13 @@ cw_window_queue_figures (CwWindow *self)
           cw_scene_free (scene);
           continue;
         }
+      if (scene == NULL || width <= 0 || height <= 0)
+        {
+          /* Nothing to draw (no analysis): the area is cleared at once. */
+          cw_scene_free (scene);
+          gtk_widget_queue_draw (GTK_WIDGET (area));
+          continue;
+        }
       /* Painted on the worker thread while the other widgets are brought up to date. */
       self->figure_pending_scale[slot] = gtk_widget_get_scale_factor (GTK_WIDGET (area));
       self->figure_pending[slot] = cw_paint_job_start (scene, opt.dark, width, height, self->figure_pending_scale[slot]);
