@@ -20,6 +20,8 @@
 
 #define N_EDITS 200
 
+/* CHAIRWISE_BENCH_SLOW=MS: also print each edit slower than MS, to see which they are. */
+static double   slow_ms;
 static gint64   frame_start;
 static gint64   paint_end;
 static gboolean painted;
@@ -128,6 +130,9 @@ run_series (CwWindow   *win,
       cpu[i] = bench_cpu_ms () - cpu[i];
       edit_only[i] = (t1 - t0) / 1000.0;
       times[i] = edit_only[i] + (painted ? (paint_end - frame_start) / 1000.0 : 1000.0);
+      if (slow_ms > 0 && times[i] > slow_ms)
+        printf ("%sslow edit %d: %.2f ms (edit %.2f ms, frame %.2f ms)\n", prefix, i, times[i], edit_only[i],
+                times[i] - edit_only[i]);
       /* Each edit is a real change of the document, and the temperature ones change K. */
       an = cw_window_get_analysis (win);
       if (win->serial == serial || (series == SERIES_TEMPERATURE && (an == NULL || an->K == before)))
@@ -182,6 +187,8 @@ main (int argc, char *argv[])
   guint          tick;
   gboolean       ok;
 
+  if (g_getenv ("CHAIRWISE_BENCH_SLOW") != NULL)
+    slow_ms = g_ascii_strtod (g_getenv ("CHAIRWISE_BENCH_SLOW"), NULL);
   /* Autosave files of this run go to a private directory. */
   {
     g_autofree char *state = g_dir_make_tmp ("cw-bench-XXXXXX", NULL);
