@@ -13,6 +13,8 @@ build (const CwData *data, const CwMolecule *mol, CwFigure fig, int width, int h
   CwAnalysis      an;
   CwRenderOptions opt;
 
+  /* 298.15 K: the standard temperature of thermochemical tables (common practice, no
+   * source needed); no result is checked here, only how the figure is painted. */
   rt_analyze (data, mol, 298.15, &an);
   cw_render_options_init (&opt);
   return cw_render_figure_scene (fig, data, mol, &an, &opt, width, height);
