@@ -24,9 +24,9 @@ build (const CwData *data, const CwMolecule *mol, CwFigure fig, int width, int h
 static guint
 n_different (cairo_surface_t *a, cairo_surface_t *b)
 {
-  int    w = cairo_image_surface_get_width (a), h = cairo_image_surface_get_height (a);
-  int    sa = cairo_image_surface_get_stride (a), sb = cairo_image_surface_get_stride (b);
-  guint  n = 0;
+  int     w = cairo_image_surface_get_width (a), h = cairo_image_surface_get_height (a);
+  int     sa = cairo_image_surface_get_stride (a), sb = cairo_image_surface_get_stride (b);
+  guint   n = 0;
   guchar *pa = cairo_image_surface_get_data (a), *pb = cairo_image_surface_get_data (b);
 
   g_assert_cmpint (w, ==, cairo_image_surface_get_width (b));
@@ -45,11 +45,11 @@ n_different (cairo_surface_t *a, cairo_surface_t *b)
 static double
 busy (cairo_surface_t *image)
 {
-  int      w = cairo_image_surface_get_width (image), h = cairo_image_surface_get_height (image);
-  int      stride = cairo_image_surface_get_stride (image);
-  guchar  *p = cairo_image_surface_get_data (image);
-  guint32  bg = ((guint32 *) p)[0] & 0xffffff;
-  guint    n = 0;
+  int     w = cairo_image_surface_get_width (image), h = cairo_image_surface_get_height (image);
+  int     stride = cairo_image_surface_get_stride (image);
+  guchar *p = cairo_image_surface_get_data (image);
+  guint32 bg = ((guint32 *) p)[0] & 0xffffff;
+  guint   n = 0;
 
   for (int y = 0; y < h; y++)
     for (int x = 0; x < w; x++)
@@ -76,7 +76,7 @@ test_same_pixels (void)
 
   for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
     {
-      CwScene         *scene = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
+      CwScene *scene = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
       g_autoptr (CwScene) again = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
       g_autoptr (CwPaintJob) job = cw_paint_job_start (scene, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
       cairo_surface_t *image = cw_paint_job_wait (job);
