@@ -65,6 +65,9 @@ figure_area (CwWindow *self,
     }
 }
 
+/* The figures the window shows, each in its own drawing area. */
+static const CwFigure window_figures[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
+
 static guint
 figure_slot (CwFigure fig)
 {
@@ -105,18 +108,18 @@ warm_up_cb (gpointer data)
   CwWindow *self = data;
 
   self->warm_up_id = 0;
-  for (guint slot = 0; slot < G_N_ELEMENTS (self->figure_drawn); slot++)
+  for (guint i = 0; i < G_N_ELEMENTS (window_figures); i++)
     {
-      static const CwFigure figs[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
-      GtkDrawingArea       *area = figure_area (self, figs[slot]);
-      int                   width = self->figure_drawn_width[slot], height = self->figure_drawn_height[slot];
-      CwRenderOptions       opt;
-      CwScene              *scene;
+      GtkDrawingArea *area = figure_area (self, window_figures[i]);
+      guint           slot = figure_slot (window_figures[i]);
+      int             width = self->figure_drawn_width[slot], height = self->figure_drawn_height[slot];
+      CwRenderOptions opt;
+      CwScene        *scene;
 
       if (!self->figure_drawn_valid[slot] || width <= 0 || height <= 0)
         continue;
       cw_window_render_options (self, GTK_WIDGET (area), &opt);
-      scene = figure_scene (self, figs[slot], width, height, &opt);
+      scene = figure_scene (self, window_figures[i], width, height, &opt);
       if (scene != NULL)
         cw_paint_job_warm_up (scene, opt.dark, width, height, gtk_widget_get_scale_factor (GTK_WIDGET (area)));
     }
@@ -200,12 +203,10 @@ figure_tolerance (GtkDrawingArea *area,
 void
 cw_window_queue_figures (CwWindow *self)
 {
-  static const CwFigure figs[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
-
-  for (guint i = 0; i < G_N_ELEMENTS (figs); i++)
+  for (guint i = 0; i < G_N_ELEMENTS (window_figures); i++)
     {
-      GtkDrawingArea *area = figure_area (self, figs[i]);
-      guint           slot = figure_slot (figs[i]);
+      GtkDrawingArea *area = figure_area (self, window_figures[i]);
+      guint           slot = figure_slot (window_figures[i]);
       int             width = gtk_widget_get_width (GTK_WIDGET (area));
       int             height = gtk_widget_get_height (GTK_WIDGET (area));
       CwRenderOptions opt;
@@ -219,7 +220,7 @@ cw_window_queue_figures (CwWindow *self)
           continue;
         }
       cw_window_render_options (self, GTK_WIDGET (area), &opt);
-      scene = figure_scene (self, figs[i], width, height, &opt);
+      scene = figure_scene (self, window_figures[i], width, height, &opt);
       if (opt.dark == self->figure_drawn_dark[slot] &&
           cw_scene_equal_within (scene, self->figure_drawn[slot], figure_tolerance (area, scene, width, height)))
         {
