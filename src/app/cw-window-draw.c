@@ -99,9 +99,9 @@ figure_scene (CwWindow              *self,
                                  self->an_valid ? &self->an : NULL, opt, width, height);
 }
 
-/* The worker's first figure loads fonts for it, which takes longer than a frame: once the
- * window's first figures are on screen, the worker paints them too, and throws the images
- * away, so that the first edit is as quick as the others. */
+/* A window's first figures are laid out and painted on the worker, whose fonts were loaded
+ * while the window was being built (cw_window_start_figures). The window's own fonts for the
+ * figures, which it needs to lay out each change, are loaded once they are on screen. */
 static gboolean
 warm_up_cb (gpointer data)
 {
@@ -114,16 +114,56 @@ warm_up_cb (gpointer data)
       guint           slot = figure_slot (window_figures[i]);
       int             width = self->figure_drawn_width[slot], height = self->figure_drawn_height[slot];
       CwRenderOptions opt;
-      CwScene        *scene;
 
       if (!self->figure_drawn_valid[slot] || width <= 0 || height <= 0)
         continue;
       cw_window_render_options (self, GTK_WIDGET (area), &opt);
-      scene = figure_scene (self, window_figures[i], width, height, &opt);
-      if (scene != NULL)
-        cw_paint_job_warm_up (scene, opt.dark, width, height, gtk_widget_get_scale_factor (GTK_WIDGET (area)));
+      cw_scene_free (figure_scene (self, window_figures[i], width, height, &opt));
     }
+  self->fonts_loaded = TRUE;
   return G_SOURCE_REMOVE;
+}
+
+/* A molecule whose figures use every kind of text the window's figures show: plain, italic,
+ * subscript and superscript group labels. */
+#define WARM_UP_RING "1u=tert-butyl 2d=hydroxy 4u=trifluoromethyl 5d=carboxylate"
+
+void
+cw_window_start_figures (CwWindow *self)
+{
+  g_autoptr (CwDocument) doc = cw_document_new ();
+  g_autoptr (CwMolecule) mol = cw_molecule_new_from_spec (WARM_UP_RING, self->data->groups, NULL);
+  CwConditions cond;
+
+  if (mol == NULL)
+    return;
+  cw_document_get_conditions (doc, &cond);
+  self->warm_up_job = cw_paint_job_warm_up_figures (self->data, mol, &cond, 1);
+}
+
+/* Waits for job, copies its image into cr (or paints its scene here if Cairo failed on the
+ * worker), frees it and returns its scene. */
+static CwScene *
+finish_job (CwWindow   *self,
+            CwPaintJob *job,
+            cairo_t    *cr,
+            gboolean    dark,
+            int         width,
+            int         height)
+{
+  cairo_surface_t *image = cw_paint_job_wait (job);
+  CwScene         *scene = cw_paint_job_steal_scene (job);
+
+  if (image != NULL)
+    {
+      cairo_set_source_surface (cr, image, 0, 0);
+      cairo_paint (cr);
+      self->n_worker_figures++;
+    }
+  else
+    cw_render_figure_paint (cr, scene, dark, width, height);
+  cw_paint_job_free (job);
+  return scene;
 }
 
 static void
@@ -145,32 +185,28 @@ draw_figure (CwWindow       *self,
   if (self->figure_pending[slot] != NULL && self->figure_pending_stamp[slot] == self->figure_stamp &&
       self->figure_pending_width[slot] == width && self->figure_pending_height[slot] == height &&
       self->figure_pending_scale[slot] == scale && memcmp (&self->figure_pending_opt[slot], &opt, sizeof opt) == 0)
+    scene = finish_job (self, g_steal_pointer (&self->figure_pending[slot]), cr, opt.dark, width, height);
+  else if (!self->fonts_loaded && self->an_valid && width > 0 && height > 0)
     {
-      CwPaintJob      *job = g_steal_pointer (&self->figure_pending[slot]);
-      cairo_surface_t *image = cw_paint_job_wait (job);
+      /* The first figures: on the worker, whose fonts are loaded, while this thread waits. */
+      CwPaintJob *job;
 
-      scene = cw_paint_job_steal_scene (job);
-      if (image != NULL)
-        {
-          cairo_set_source_surface (cr, image, 0, 0);
-          cairo_paint (cr);
-          self->n_worker_figures++;
-        }
-      else
-        cw_render_figure_paint (cr, scene, opt.dark, width, height);
-      cw_paint_job_free (job);
-    }
-  else
-    {
       g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
-      scene = figure_scene (self, fig, width, height, &opt);
-      cw_render_figure_paint (cr, scene, opt.dark, width, height);
+      job = cw_paint_job_start_figure (fig, self->data, cw_document_peek_molecule (self->doc), &self->an, &opt, width,
+                                       height, scale);
+      scene = finish_job (self, job, cr, opt.dark, width, height);
       if (!self->warm_up_done && scene != NULL)
         {
           /* After this frame. */
           self->warm_up_done = TRUE;
           self->warm_up_id = g_idle_add (warm_up_cb, self);
         }
+    }
+  else
+    {
+      g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
+      scene = figure_scene (self, fig, width, height, &opt);
+      cw_render_figure_paint (cr, scene, opt.dark, width, height);
     }
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
   g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
@@ -250,6 +286,7 @@ void
 cw_window_stop_figures (CwWindow *self)
 {
   g_clear_handle_id (&self->warm_up_id, g_source_remove);
+  g_clear_pointer (&self->warm_up_job, cw_paint_job_free);
 }
 
 /* Forgets the figures as drawn: the next change redraws all three. */

@@ -87,8 +87,10 @@ struct _CwWindow
   guint           figure_pending_stamp[3];
   guint           figure_stamp;
   guint           n_worker_figures; /* figures drawn from the worker's image (for tests) */
-  guint           warm_up_id;       /* idle that warms the worker up, once */
+  CwPaintJob     *warm_up_job;      /* loads the worker's fonts while the window is built */
+  guint           warm_up_id;       /* idle that loads the window's own fonts for the figures, once */
   gboolean        warm_up_done;
+  gboolean        fonts_loaded;     /* by warm_up_id: the window lays out its figures itself */
 
   /* state */
   const CwData *data; /* process-wide, see cw-app-data.h */
@@ -144,6 +146,7 @@ gboolean cw_window_set_smiles (CwWindow   *self,
 /* cw-window-draw.c: the figures on screen (through the render layer). */
 void cw_window_queue_figures (CwWindow *self);
 void cw_window_clear_figures (CwWindow *self);
+void cw_window_start_figures (CwWindow *self);
 void cw_window_stop_figures (CwWindow *self);
 void cw_window_draw_chairs_cb (GtkDrawingArea *area,
                                cairo_t        *cr,

@@ -540,13 +540,15 @@ cw_window_init (CwWindow *self)
   g_autoptr (GAction) tunit = NULL;
   g_autoptr (GError) error = NULL;
 
-  gtk_widget_init_template (GTK_WIDGET (self));
-
-  self->frame_sync = TRUE; /* GDK's default */
   self->data = cw_app_get_data (&error);
   /* The tables are compiled into the program; failing here is a broken build. */
   if (self->data == NULL)
     g_error ("Cannot load the group tables: %s", error->message);
+  /* The worker loads its fonts for the figures meanwhile. */
+  cw_window_start_figures (self);
+  gtk_widget_init_template (GTK_WIDGET (self));
+
+  self->frame_sync = TRUE; /* GDK's default */
 
   self->settings = cw_app_settings_new ();
   read_units (self);

@@ -2,20 +2,40 @@
 
 #include "cw-paint-job.h"
 
+#include "cw-render-private.h"
 #include "cw-render.h"
+
+/* What a job does on the worker. */
+typedef enum
+{
+  JOB_PAINT,  /* paint the scene given */
+  JOB_FIGURE, /* lay the figure out from borrowed inputs, then paint it */
+  JOB_WARM_UP /* lay out and paint every figure of a window for a molecule of its own */
+} JobKind;
 
 /* A job is shared by its owner and, until it has run, the worker: whoever lets go last
  * frees it. */
 struct _CwPaintJob
 {
-  gatomicrefcount  ref;
-  gint             dropped; /* atomic: the owner let go before the job ran */
-  CwScene         *scene;
-  gboolean         dark;
-  int              width, height, scale;
-  GMutex           lock;
-  GCond            cond;
-  gboolean         done; /* under lock */
+  gatomicrefcount ref;
+  JobKind         kind;
+  CwScene        *scene;
+  gboolean        dark;
+  int             width, height, scale;
+  /* JOB_FIGURE: borrowed; JOB_WARM_UP: data borrowed, mol and cond owned */
+  CwFigure          fig;
+  const CwData     *data;
+  const CwMolecule *mol;
+  const CwAnalysis *an;
+  CwRenderOptions   opt;
+  CwMolecule       *own_mol;
+  CwConditions      cond;
+  GMutex            lock;
+  GCond             cond_done;
+  /* under lock */
+  gboolean         dropped; /* the owner let go before the job ran */
+  gboolean         running;
+  gboolean         done;
   cairo_surface_t *image;
 };
 
@@ -26,24 +46,75 @@ job_unref (CwPaintJob *job)
     return;
   g_clear_pointer (&job->image, cairo_surface_destroy);
   g_clear_pointer (&job->scene, cw_scene_free);
+  g_clear_pointer (&job->own_mol, cw_molecule_free);
   g_mutex_clear (&job->lock);
-  g_cond_clear (&job->cond);
+  g_cond_clear (&job->cond_done);
   g_free (job);
 }
 
+/* The figures a window shows, laid out at their design size for the job's own molecule and
+ * painted, and thrown away: the first figure a thread lays out and paints loads the fonts and
+ * glyphs every figure then uses. */
 static void
-paint (gpointer data,
-       gpointer user_data)
+warm_up (CwPaintJob *job)
+{
+  static const CwFigure  figures[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
+  g_autofree CwAnalysis *an = g_new0 (CwAnalysis, 1);
+  CwRenderOptions        opt;
+
+  if (!cw_analyze (job->data, job->own_mol, &job->cond, an, NULL))
+    return;
+  cw_render_options_init (&opt);
+  for (guint i = 0; i < G_N_ELEMENTS (figures); i++)
+    {
+      double   w, h;
+      CwScene *scene;
+
+      cw_render_figure_size (figures[i], &w, &h);
+      scene = cw_render_figure_scene (figures[i], job->data, job->own_mol, an, &opt, w, h);
+      if (scene != NULL)
+        {
+          cairo_surface_t *image = cw_render_figure_image (scene, FALSE, (int) w, (int) h, job->scale);
+
+          if (image != NULL)
+            cairo_surface_destroy (image);
+          cw_scene_free (scene);
+        }
+    }
+}
+
+static void
+run (gpointer data,
+     gpointer user_data)
 {
   CwPaintJob      *job = data;
   cairo_surface_t *image = NULL;
+  gboolean         skip;
 
-  if (!g_atomic_int_get (&job->dropped))
-    image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
+  g_mutex_lock (&job->lock);
+  skip = job->dropped;
+  job->running = !skip;
+  g_mutex_unlock (&job->lock);
+  if (!skip)
+    switch (job->kind)
+      {
+      case JOB_FIGURE:
+        job->scene = cw_render_figure_scene (job->fig, job->data, job->mol, job->an, &job->opt, job->width, job->height);
+        if (job->scene != NULL)
+          image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
+        break;
+      case JOB_WARM_UP:
+        warm_up (job);
+        break;
+      case JOB_PAINT:
+      default:
+        image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
+        break;
+      }
   g_mutex_lock (&job->lock);
   job->image = image;
   job->done = TRUE;
-  g_cond_signal (&job->cond);
+  g_cond_signal (&job->cond_done);
   g_mutex_unlock (&job->lock);
   job_unref (job);
 }
@@ -56,11 +127,30 @@ pool (void)
 
   if (g_once_init_enter (&pool))
     {
-      GThreadPool *p = g_thread_pool_new (paint, NULL, 1, TRUE, NULL);
+      GThreadPool *p = g_thread_pool_new (run, NULL, 1, TRUE, NULL);
 
       g_once_init_leave (&pool, p);
     }
   return pool;
+}
+
+static CwPaintJob *
+job_new (JobKind kind,
+         int     width,
+         int     height,
+         int     scale)
+{
+  CwPaintJob *job = g_new0 (CwPaintJob, 1);
+
+  g_atomic_ref_count_init (&job->ref);
+  g_atomic_ref_count_inc (&job->ref); /* the worker's */
+  job->kind = kind;
+  job->width = width;
+  job->height = height;
+  job->scale = scale;
+  g_mutex_init (&job->lock);
+  g_cond_init (&job->cond_done);
+  return job;
 }
 
 CwPaintJob *
@@ -73,25 +163,53 @@ cw_paint_job_start (CwScene *scene,
   CwPaintJob *job;
 
   g_return_val_if_fail (scene != NULL && width > 0 && height > 0 && scale > 0, NULL);
-  job = g_new0 (CwPaintJob, 1);
-  g_atomic_ref_count_init (&job->ref);
-  g_atomic_ref_count_inc (&job->ref); /* the worker's */
+  job = job_new (JOB_PAINT, width, height, scale);
   job->scene = scene;
   job->dark = dark;
-  job->width = width;
-  job->height = height;
-  job->scale = scale;
-  g_mutex_init (&job->lock);
-  g_cond_init (&job->cond);
   g_thread_pool_push (pool (), job, NULL);
   return job;
 }
 
-const CwScene *
-cw_paint_job_get_scene (CwPaintJob *job)
+CwPaintJob *
+cw_paint_job_start_figure (CwFigure               fig,
+                           const CwData          *data,
+                           const CwMolecule      *mol,
+                           const CwAnalysis      *an,
+                           const CwRenderOptions *opt,
+                           int                    width,
+                           int                    height,
+                           int                    scale)
 {
-  g_return_val_if_fail (job != NULL, NULL);
-  return job->scene;
+  CwPaintJob *job;
+
+  g_return_val_if_fail (data != NULL && mol != NULL && opt != NULL, NULL);
+  g_return_val_if_fail (width > 0 && height > 0 && scale > 0, NULL);
+  job = job_new (JOB_FIGURE, width, height, scale);
+  job->fig = fig;
+  job->data = data;
+  job->mol = mol;
+  job->an = an;
+  job->opt = *opt;
+  job->dark = opt->dark;
+  g_thread_pool_push (pool (), job, NULL);
+  return job;
+}
+
+CwPaintJob *
+cw_paint_job_warm_up_figures (const CwData       *data,
+                              const CwMolecule   *mol,
+                              const CwConditions *cond,
+                              int                 scale)
+{
+  CwPaintJob *job;
+
+  g_return_val_if_fail (data != NULL && mol != NULL && cond != NULL && scale > 0, NULL);
+  job = job_new (JOB_WARM_UP, 1, 1, scale);
+  job->data = data;
+  job->own_mol = cw_molecule_copy (mol);
+  job->cond = *cond;
+  g_thread_pool_push (pool (), job, NULL);
+  return job;
 }
 
 cairo_surface_t *
@@ -102,7 +220,7 @@ cw_paint_job_wait (CwPaintJob *job)
   g_return_val_if_fail (job != NULL, NULL);
   g_mutex_lock (&job->lock);
   while (!job->done)
-    g_cond_wait (&job->cond, &job->lock);
+    g_cond_wait (&job->cond_done, &job->lock);
   image = job->image;
   g_mutex_unlock (&job->lock);
   return image;
@@ -121,20 +239,12 @@ cw_paint_job_free (CwPaintJob *job)
 {
   if (job == NULL)
     return;
-  g_atomic_int_set (&job->dropped, TRUE);
+  g_mutex_lock (&job->lock);
+  job->dropped = TRUE;
+  /* A job that reads borrowed inputs is not left running on them. */
+  if (job->kind != JOB_PAINT)
+    while (job->running && !job->done)
+      g_cond_wait (&job->cond_done, &job->lock);
+  g_mutex_unlock (&job->lock);
   job_unref (job);
-}
-
-void
-cw_paint_job_warm_up (CwScene *scene,
-                      gboolean dark,
-                      int      width,
-                      int      height,
-                      int      scale)
-{
-  CwPaintJob *job = cw_paint_job_start (scene, dark, width, height, scale);
-
-  /* The owner lets go without dropping the job: it is painted all the same. */
-  if (job != NULL)
-    job_unref (job);
 }

@@ -130,6 +130,10 @@ test_worker_figures_same_pixels (void)
   gtk_window_set_default_size (GTK_WINDOW (win), 1100, 760);
   gtk_window_present (GTK_WINDOW (win));
   app_test_wait_mapped (GTK_WIDGET (win));
+  app_test_pump (300, NULL);
+  /* The first figures were laid out and painted on the worker, whose fonts were loaded while
+   * the window was built. */
+  g_assert_cmpuint (win->n_worker_figures, >=, 2);
 
   n = win->n_worker_figures;
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 3, "up", "bromo");

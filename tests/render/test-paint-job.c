@@ -98,6 +98,62 @@ test_same_pixels (void)
     }
 }
 
+/* A figure laid out on the worker as well: the same scene and pixels as laid out and painted
+ * here. */
+static void
+test_figure_job (void)
+{
+  g_autoptr (CwData) data = rt_load_data ();
+  g_autoptr (CwMolecule) mol = rt_ring (data, spec);
+  g_autoptr (CwMolecule) bare = cw_molecule_new ();
+  g_autofree CwAnalysis *an = g_new0 (CwAnalysis, 1);
+  static const struct
+  {
+    CwFigure fig;
+    int      width, height, scale;
+    gboolean dark;
+  } cases[] = {
+    { CW_FIGURE_CHAIRS, 640, 260, 1, FALSE },
+    { CW_FIGURE_PROFILE, 700, 140, 2, TRUE },
+    { CW_FIGURE_SCAN, 420, 180, 1, FALSE },
+  };
+
+  /* 298.15 K: as in build() above. */
+  rt_analyze (data, mol, 298.15, an);
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      CwRenderOptions opt;
+      g_autoptr (CwScene) here = NULL;
+      g_autoptr (CwScene) back = NULL;
+      g_autoptr (CwPaintJob) job = NULL;
+      cairo_surface_t *image, *expected;
+
+      cw_render_options_init (&opt);
+      opt.dark = cases[i].dark;
+      job = cw_paint_job_start_figure (cases[i].fig, data, mol, an, &opt, cases[i].width, cases[i].height, cases[i].scale);
+      here = cw_render_figure_scene (cases[i].fig, data, mol, an, &opt, cases[i].width, cases[i].height);
+      image = cw_paint_job_wait (job);
+      g_assert_nonnull (image);
+      g_assert_cmpfloat (busy (image), >, 0.01);
+      expected = cw_render_figure_image (here, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
+      g_assert_cmpuint (n_different (image, expected), ==, 0);
+      cairo_surface_destroy (expected);
+      back = cw_paint_job_steal_scene (job);
+      g_assert_true (cw_scene_equal (back, here));
+    }
+
+  /* A box too small to draw in: no scene and no image, and no failure. */
+  {
+    CwRenderOptions opt;
+    g_autoptr (CwPaintJob) job = NULL;
+
+    cw_render_options_init (&opt);
+    job = cw_paint_job_start_figure (CW_FIGURE_CHAIRS, data, bare, an, &opt, 1, 1, 1);
+    g_assert_null (cw_paint_job_wait (job));
+    g_assert_null (cw_paint_job_steal_scene (job));
+  }
+}
+
 /* Jobs dropped before, while and after they run; the ones kept still finish. */
 static void
 test_drop (void)
@@ -105,6 +161,8 @@ test_drop (void)
   g_autoptr (CwData) data = rt_load_data ();
   g_autoptr (CwMolecule) mol = rt_ring (data, spec);
   CwPaintJob *kept[4];
+  /* As in build() above. */
+  CwConditions cond = { 298.15, CW_SOLVENT_APROTIC };
 
   for (int round = 0; round < 20; round++)
     {
@@ -117,7 +175,7 @@ test_drop (void)
             g_usleep (200);
           cw_paint_job_free (dropped);
         }
-      cw_paint_job_warm_up (build (data, mol, CW_FIGURE_SCAN, 200, 100), FALSE, 200, 100, 1);
+      cw_paint_job_free (cw_paint_job_warm_up_figures (data, mol, &cond, 1));
       for (int k = 0; k < 4; k++)
         {
           g_assert_nonnull (cw_paint_job_wait (kept[k]));
@@ -127,11 +185,50 @@ test_drop (void)
   cw_paint_job_free (NULL);
 }
 
+/* Jobs that read borrowed inputs are not left running on them: once such a job is freed, its
+ * inputs can go (AddressSanitizer and valgrind would see the worker read freed memory). Each
+ * job is freed a little later than the one before, so that some are freed while they run. */
+static void
+test_drop_borrowed (void)
+{
+  g_autoptr (CwData) data = rt_load_data ();
+  /* As in build() above. */
+  CwConditions cond = { 298.15, CW_SOLVENT_APROTIC };
+
+  for (int round = 0; round < 40; round++)
+    {
+      CwMolecule     *mol = rt_ring (data, spec);
+      CwAnalysis     *an = g_new0 (CwAnalysis, 1);
+      CwRenderOptions opt;
+      CwPaintJob     *job;
+
+      rt_analyze (data, mol, 298.15, an);
+      cw_render_options_init (&opt);
+      job = cw_paint_job_start_figure (CW_FIGURE_CHAIRS, data, mol, an, &opt, 500, 200, 1);
+      g_usleep (round * 50);
+      cw_paint_job_free (job);
+      cw_molecule_free (mol);
+      g_free (an);
+    }
+  for (int round = 0; round < 10; round++)
+    {
+      CwMolecule *mol = rt_ring (data, spec);
+      CwPaintJob *job = cw_paint_job_warm_up_figures (data, mol, &cond, 1);
+
+      /* The warm-up copies its molecule. */
+      cw_molecule_free (mol);
+      g_usleep (round * 1000);
+      cw_paint_job_free (job);
+    }
+}
+
 int
 main (int argc, char *argv[])
 {
   g_test_init (&argc, &argv, NULL);
   g_test_add_func ("/render/paint-job/same-pixels", test_same_pixels);
+  g_test_add_func ("/render/paint-job/figure", test_figure_job);
   g_test_add_func ("/render/paint-job/drop", test_drop);
+  g_test_add_func ("/render/paint-job/drop-borrowed", test_drop_borrowed);
   return g_test_run ();
 }
