@@ -1,10 +1,18 @@
 /* Benchmark: start of the chairwise process to its first painted frame, and resident
  * memory then, with the demo document open. Runs the real program with --screenshot,
  * which prints "first-frame-ms:" and "resident-kib:" at its first frame.
- * Targets: first frame <= 300 ms (measured from spawn, here), RSS <= 60 MB. */
+ * Targets: first frame <= 300 ms (measured from spawn, here), RSS <= 60 MB.
+ *
+ * The benchmark keeps its own connection to the display for all its runs, as a desktop
+ * session does. Otherwise Xvfb resets itself each time the program under test closes
+ * its connection, the last one open: it reloads its keymap (running xkbcomp) and
+ * allocates its screen afresh while the next run starts, and the next window then waits
+ * for that and pays for touching the new screen memory. Measured on Xvfb 21.1 with
+ * 5 runs: the window's mapping took 30-40 ms with the reset and 3-5 ms without. */
 #include "config.h"
 
 #include <gio/gio.h>
+#include <gtk/gtk.h>
 #include <stdio.h>
 #include <stdlib.h>
 
@@ -29,11 +37,13 @@ main (int argc, char *argv[])
       fprintf (stderr, "usage: %s PATH-TO-CHAIRWISE\n", argv[0]);
       return 2;
     }
-  if (g_getenv ("DISPLAY") == NULL)
+  if (g_getenv ("DISPLAY") == NULL || !gtk_init_check ())
     {
       printf ("no display: benchmark skipped\n");
       return 77;
     }
+  /* Held until the end: see the top of this file. */
+  GdkDisplay *session = gdk_display_get_default ();
   shot = g_build_filename (dir, "startup.png", NULL);
   g_setenv ("XDG_STATE_HOME", dir, TRUE);
   for (int r = 0; r < RUNS; r++)
@@ -80,6 +90,7 @@ main (int argc, char *argv[])
    * the X server and for other load on the machine. */
   printf ("process CPU to first frame median: %.1f ms (max %.1f)\n", cpu_ms[RUNS / 2], cpu_ms[RUNS - 1]);
   printf ("resident memory median: %.1f MB (max %.1f)\n", rss_mb[RUNS / 2], rss_mb[RUNS - 1]);
+  gdk_display_close (session);
   if (frame_ms[RUNS / 2] > 300.0 || rss_mb[RUNS / 2] > 60.0)
     {
       printf ("FAIL: targets are first frame <= 300 ms and resident memory <= 60 MB\n");
