@@ -22,6 +22,10 @@ struct _CwWindow
   GtkLabel       *title_label;
   CwSteadyLabel  *subtitle_label;
   GtkMenuButton  *temperature_button;
+  GtkMenuButton  *primary_menu_button;
+  GtkMenuButton  *export_menu_button;
+  GMenuModel     *primary_menu;
+  GMenuModel     *export_menu;
   GtkSpinButton  *temperature_spin;
   GtkAdjustment  *temperature_adjustment;
   GtkLabel       *temperature_error_label;

@@ -740,6 +740,39 @@ test_frame_sync (void)
 #endif
 }
 
+/* The main and export menus are built when they first open; they then hold the template's
+ * menus, and open again as they are. */
+static void
+test_menus (void)
+{
+  CwWindow      *win = new_window ();
+  GtkMenuButton *buttons[] = { win->primary_menu_button, win->export_menu_button };
+  GMenuModel    *menus[] = { win->primary_menu, win->export_menu };
+
+  for (guint i = 0; i < G_N_ELEMENTS (buttons); i++)
+    {
+      GtkWidget *popover;
+
+      g_assert_null (gtk_menu_button_get_popover (buttons[i]));
+      g_assert_true (gtk_widget_get_sensitive (GTK_WIDGET (buttons[i])));
+      gtk_menu_button_popup (buttons[i]);
+      app_test_pump (50, NULL);
+      popover = GTK_WIDGET (gtk_menu_button_get_popover (buttons[i]));
+      g_assert_nonnull (popover);
+      g_assert_true (gtk_menu_button_get_menu_model (buttons[i]) == menus[i]);
+      g_assert_cmpint (g_menu_model_get_n_items (menus[i]), >, 0);
+      g_assert_true (gtk_widget_get_visible (popover));
+      gtk_menu_button_popdown (buttons[i]);
+      app_test_pump (50, NULL);
+      gtk_menu_button_popup (buttons[i]);
+      app_test_pump (50, NULL);
+      g_assert_true (GTK_WIDGET (gtk_menu_button_get_popover (buttons[i])) == popover);
+      g_assert_true (gtk_widget_get_visible (popover));
+      gtk_menu_button_popdown (buttons[i]);
+    }
+  destroy_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -748,6 +781,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/frame-sync", test_frame_sync);
+  g_test_add_func ("/app/window/menus", test_menus);
   g_test_add_func ("/app/window/result-sheet", test_result_sheet);
   g_test_add_func ("/app/window/steady-label", test_steady_label);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
