@@ -99,13 +99,30 @@ figure_scene (CwWindow              *self,
                                  self->an_valid ? &self->an : NULL, opt, width, height);
 }
 
+/* A molecule whose figures use every kind of text the window's figures show: plain, italic,
+ * subscript and superscript group labels. */
+#define WARM_UP_RING "1u=tert-butyl 2d=hydroxy 4u=trifluoromethyl 5d=carboxylate"
+
+static CwMolecule *
+warm_up_molecule (CwWindow     *self,
+                  CwConditions *cond)
+{
+  g_autoptr (CwDocument) doc = cw_document_new ();
+
+  cw_document_get_conditions (doc, cond);
+  return cw_molecule_new_from_spec (WARM_UP_RING, self->data->groups, NULL);
+}
+
 /* A window's first figures are laid out and painted on the worker, whose fonts were loaded
  * while the window was being built (cw_window_start_figures). The window's own fonts for the
- * figures, which it needs to lay out each change, are loaded once they are on screen. */
+ * figures, which it needs to lay out each change, are loaded once they are on screen: for the
+ * figures as shown, and for every kind of group label. */
 static gboolean
 warm_up_cb (gpointer data)
 {
   CwWindow *self = data;
+  g_autoptr (CwMolecule) mol = NULL;
+  CwConditions cond;
 
   self->warm_up_id = 0;
   for (guint i = 0; i < G_N_ELEMENTS (window_figures); i++)
@@ -120,25 +137,21 @@ warm_up_cb (gpointer data)
       cw_window_render_options (self, GTK_WIDGET (area), &opt);
       cw_scene_free (figure_scene (self, window_figures[i], width, height, &opt));
     }
+  mol = warm_up_molecule (self, &cond);
+  if (mol != NULL)
+    cw_render_warm_up (self->data, mol, &cond, 0);
   self->fonts_loaded = TRUE;
   return G_SOURCE_REMOVE;
 }
 
-/* A molecule whose figures use every kind of text the window's figures show: plain, italic,
- * subscript and superscript group labels. */
-#define WARM_UP_RING "1u=tert-butyl 2d=hydroxy 4u=trifluoromethyl 5d=carboxylate"
-
 void
 cw_window_start_figures (CwWindow *self)
 {
-  g_autoptr (CwDocument) doc = cw_document_new ();
-  g_autoptr (CwMolecule) mol = cw_molecule_new_from_spec (WARM_UP_RING, self->data->groups, NULL);
   CwConditions cond;
+  g_autoptr (CwMolecule) mol = warm_up_molecule (self, &cond);
 
-  if (mol == NULL)
-    return;
-  cw_document_get_conditions (doc, &cond);
-  self->warm_up_job = cw_paint_job_warm_up_figures (self->data, mol, &cond, 1);
+  if (mol != NULL)
+    self->warm_up_job = cw_paint_job_warm_up_figures (self->data, mol, &cond, 1);
 }
 
 /* Waits for job, copies its image into cr (or paints its scene here if Cairo failed on the

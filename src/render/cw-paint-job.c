@@ -2,7 +2,6 @@
 
 #include "cw-paint-job.h"
 
-#include "cw-render-private.h"
 #include "cw-render.h"
 
 /* What a job does on the worker. */
@@ -52,37 +51,6 @@ job_unref (CwPaintJob *job)
   g_free (job);
 }
 
-/* The figures a window shows, laid out at their design size for the job's own molecule and
- * painted, and thrown away: the first figure a thread lays out and paints loads the fonts and
- * glyphs every figure then uses. */
-static void
-warm_up (CwPaintJob *job)
-{
-  static const CwFigure  figures[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
-  g_autofree CwAnalysis *an = g_new0 (CwAnalysis, 1);
-  CwRenderOptions        opt;
-
-  if (!cw_analyze (job->data, job->own_mol, &job->cond, an, NULL))
-    return;
-  cw_render_options_init (&opt);
-  for (guint i = 0; i < G_N_ELEMENTS (figures); i++)
-    {
-      double   w, h;
-      CwScene *scene;
-
-      cw_render_figure_size (figures[i], &w, &h);
-      scene = cw_render_figure_scene (figures[i], job->data, job->own_mol, an, &opt, w, h);
-      if (scene != NULL)
-        {
-          cairo_surface_t *image = cw_render_figure_image (scene, FALSE, (int) w, (int) h, job->scale);
-
-          if (image != NULL)
-            cairo_surface_destroy (image);
-          cw_scene_free (scene);
-        }
-    }
-}
-
 static void
 run (gpointer data,
      gpointer user_data)
@@ -104,7 +72,7 @@ run (gpointer data,
           image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
         break;
       case JOB_WARM_UP:
-        warm_up (job);
+        cw_render_warm_up (job->data, job->own_mol, &job->cond, job->scale);
         break;
       case JOB_PAINT:
       default:

@@ -171,6 +171,35 @@ cw_render_figure_scene (CwFigure fig, const CwData *data, const CwMolecule *mol,
 }
 
 void
+cw_render_warm_up (const CwData *data, const CwMolecule *mol, const CwConditions *cond, int scale)
+{
+  static const CwFigure  figures[] = { CW_FIGURE_CHAIRS, CW_FIGURE_PROFILE, CW_FIGURE_SCAN };
+  g_autofree CwAnalysis *an = g_new0 (CwAnalysis, 1);
+  CwRenderOptions        opt;
+
+  g_return_if_fail (data != NULL && mol != NULL && cond != NULL);
+  if (!cw_analyze (data, mol, cond, an, NULL))
+    return;
+  cw_render_options_init (&opt);
+  for (guint i = 0; i < G_N_ELEMENTS (figures); i++)
+    {
+      double   w, h;
+      CwScene *scene;
+
+      cw_render_figure_size (figures[i], &w, &h);
+      scene = cw_render_figure_scene (figures[i], data, mol, an, &opt, w, h);
+      if (scene != NULL && scale > 0)
+        {
+          cairo_surface_t *image = cw_render_figure_image (scene, FALSE, (int) w, (int) h, scale);
+
+          if (image != NULL)
+            cairo_surface_destroy (image);
+        }
+      cw_scene_free (scene);
+    }
+}
+
+void
 cw_render_figure_paint (cairo_t *cr, const CwScene *scene, gboolean dark, double width, double height)
 {
   g_return_if_fail (cr != NULL);

@@ -61,6 +61,11 @@ void        cw_render_figure_paint (cairo_t *cr, const CwScene *scene, gboolean 
 /* The figure painted into a new opaque image of width x height units at scale pixels per unit,
  * looking as the same figure painted by a window on screen; NULL when Cairo fails. */
 cairo_surface_t *cw_render_figure_image (const CwScene *scene, gboolean dark, int width, int height, int scale);
+/* Loads the calling thread's fonts for the figures a window shows (Pango's fonts are per
+ * thread, and the first figure a thread lays out loads them, which takes longer than the
+ * figure): lays out each figure for mol in the conditions cond at its design size and,
+ * when scale > 0, paints it into an image at scale; then throws it all away. */
+void        cw_render_warm_up (const CwData *data, const CwMolecule *mol, const CwConditions *cond, int scale);
 /* Format from the extension (.png, .svg, .pdf); atomic: temporary file, then rename. dpi is used
  * for PNG only. Always on white. */
 gboolean    cw_render_export_figure (CwFigure fig, const CwData *data, const CwDocument *doc,
