@@ -7,6 +7,14 @@
 
 static const char *const spec = "1u=methoxycarbonyl 2d=bromo 4u=ethyl";
 
+/* A figure, the box it is painted into, at scale pixels per unit, light or dark. */
+typedef struct
+{
+  CwFigure fig;
+  int      width, height, scale;
+  gboolean dark;
+} Case;
+
 static CwScene *
 build (const CwData *data, const CwMolecule *mol, CwFigure fig, int width, int height)
 {
@@ -57,17 +65,33 @@ busy (cairo_surface_t *image)
   return (double) n / (w * h);
 }
 
+/* The job's image is a real drawing of the size asked for, pixel for pixel what scene painted
+ * here gives: the worker's own fonts and text caches draw what this thread's would. Its scene
+ * comes back equal to scene. */
+static void
+check_job (CwPaintJob *job, const CwScene *scene, const Case *c)
+{
+  cairo_surface_t *image = cw_paint_job_wait (job);
+  cairo_surface_t *here;
+  g_autoptr (CwScene) back = NULL;
+
+  g_assert_nonnull (image);
+  g_assert_cmpint (cairo_image_surface_get_width (image), ==, c->width * c->scale);
+  g_assert_cmpint (cairo_image_surface_get_height (image), ==, c->height * c->scale);
+  g_assert_cmpfloat (busy (image), >, 0.01);
+  here = cw_render_figure_image (scene, c->dark, c->width, c->height, c->scale);
+  g_assert_cmpuint (n_different (image, here), ==, 0);
+  cairo_surface_destroy (here);
+  back = cw_paint_job_steal_scene (job);
+  g_assert_true (cw_scene_equal (back, scene));
+}
+
 static void
 test_same_pixels (void)
 {
   g_autoptr (CwData) data = rt_load_data ();
   g_autoptr (CwMolecule) mol = rt_ring (data, spec);
-  static const struct
-  {
-    CwFigure fig;
-    int      width, height, scale;
-    gboolean dark;
-  } cases[] = {
+  static const Case cases[] = {
     { CW_FIGURE_CHAIRS, 765, 230, 1, FALSE },
     { CW_FIGURE_PROFILE, 765, 120, 1, FALSE },
     { CW_FIGURE_SCAN, 500, 200, 1, TRUE },
@@ -79,22 +103,8 @@ test_same_pixels (void)
       CwScene *scene = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
       g_autoptr (CwScene) again = build (data, mol, cases[i].fig, cases[i].width, cases[i].height);
       g_autoptr (CwPaintJob) job = cw_paint_job_start (scene, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
-      cairo_surface_t *image = cw_paint_job_wait (job);
-      cairo_surface_t *here;
-      g_autoptr (CwScene) back = NULL;
 
-      g_assert_nonnull (image);
-      g_assert_cmpint (cairo_image_surface_get_width (image), ==, cases[i].width * cases[i].scale);
-      g_assert_cmpint (cairo_image_surface_get_height (image), ==, cases[i].height * cases[i].scale);
-      /* A real drawing, not an empty box. */
-      g_assert_cmpfloat (busy (image), >, 0.01);
-      /* The worker's own fonts and text caches draw what the main thread's would. */
-      here = cw_render_figure_image (again, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
-      g_assert_cmpuint (n_different (image, here), ==, 0);
-      cairo_surface_destroy (here);
-      /* The scene comes back as it went. */
-      back = cw_paint_job_steal_scene (job);
-      g_assert_true (cw_scene_equal (back, again));
+      check_job (job, again, &cases[i]);
     }
 }
 
@@ -107,15 +117,10 @@ test_figure_job (void)
   g_autoptr (CwMolecule) mol = rt_ring (data, spec);
   g_autoptr (CwMolecule) bare = cw_molecule_new ();
   g_autofree CwAnalysis *an = g_new0 (CwAnalysis, 1);
-  static const struct
-  {
-    CwFigure fig;
-    int      width, height, scale;
-    gboolean dark;
-  } cases[] = {
-    { CW_FIGURE_CHAIRS, 640, 260, 1, FALSE },
-    { CW_FIGURE_PROFILE, 700, 140, 2, TRUE },
-    { CW_FIGURE_SCAN, 420, 180, 1, FALSE },
+  static const Case      cases[] = {
+         { CW_FIGURE_CHAIRS, 640, 260, 1, FALSE },
+         { CW_FIGURE_PROFILE, 700, 140, 2, TRUE },
+         { CW_FIGURE_SCAN, 420, 180, 1, FALSE },
   };
 
   /* 298.15 K: as in build() above. */
@@ -124,22 +129,13 @@ test_figure_job (void)
     {
       CwRenderOptions opt;
       g_autoptr (CwScene) here = NULL;
-      g_autoptr (CwScene) back = NULL;
       g_autoptr (CwPaintJob) job = NULL;
-      cairo_surface_t *image, *expected;
 
       cw_render_options_init (&opt);
       opt.dark = cases[i].dark;
       job = cw_paint_job_start_figure (cases[i].fig, data, mol, an, &opt, cases[i].width, cases[i].height, cases[i].scale);
       here = cw_render_figure_scene (cases[i].fig, data, mol, an, &opt, cases[i].width, cases[i].height);
-      image = cw_paint_job_wait (job);
-      g_assert_nonnull (image);
-      g_assert_cmpfloat (busy (image), >, 0.01);
-      expected = cw_render_figure_image (here, cases[i].dark, cases[i].width, cases[i].height, cases[i].scale);
-      g_assert_cmpuint (n_different (image, expected), ==, 0);
-      cairo_surface_destroy (expected);
-      back = cw_paint_job_steal_scene (job);
-      g_assert_true (cw_scene_equal (back, here));
+      check_job (job, here, &cases[i]);
     }
 
   /* A box too small to draw in: no scene and no image, and no failure. */
