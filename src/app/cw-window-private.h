@@ -108,6 +108,7 @@ struct _CwWindow
   guint         autosave_id;
   gulong        first_frame_id; /* after-paint handler that sets the window icon */
   gboolean      frame_sync;     /* X11: frame sync with the window manager is on */
+  gulong        sync_id;        /* X11: before-paint handler, a round trip while frame sync is off */
   guint         n_custom_shown; /* custom groups in groups_store */
   gboolean      updating_temperature;
   gboolean      close_confirmed;

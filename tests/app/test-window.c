@@ -734,6 +734,8 @@ test_frame_sync (void)
   g_assert_cmpint (win->frame_sync, ==,
                    gdk_x11_screen_supports_net_wm_hint (gdk_x11_display_get_screen (display),
                                                         g_intern_static_string ("_NET_WM_FRAME_DRAWN")));
+  /* And, while it is off, a round trip to the X server before each frame. */
+  g_assert_cmpuint (win->sync_id, !=, 0);
   destroy_window (win);
 #else
   g_test_skip ("built without X11");
