@@ -222,6 +222,8 @@ draw_figure (CwWindow       *self,
       cw_render_figure_paint (cr, scene, opt.dark, width, height);
     }
   /* Kept to tell, at the next change, whether this figure needs drawing again. */
+  g_free (self->figure_spec[slot]);
+  self->figure_spec[slot] = cw_molecule_dup_spec (cw_document_peek_molecule (self->doc));
   g_clear_pointer (&self->figure_drawn[slot], cw_scene_free);
   self->figure_drawn[slot] = scene;
   self->figure_drawn_valid[slot] = TRUE;
@@ -247,20 +249,45 @@ figure_tolerance (GtkDrawingArea *area,
   return s > 0 ? 1.0 / (256.0 * s) : 0.0;
 }
 
+/* Keeps job, started for the figure in slot, to be drawn at the next frame. */
+static void
+keep_pending (CwWindow              *self,
+              guint                  slot,
+              CwPaintJob            *job,
+              const CwRenderOptions *opt,
+              int                    width,
+              int                    height,
+              int                    scale)
+{
+  self->figure_pending[slot] = job;
+  self->figure_pending_opt[slot] = *opt;
+  self->figure_pending_width[slot] = width;
+  self->figure_pending_height[slot] = height;
+  self->figure_pending_scale[slot] = scale;
+  self->figure_pending_stamp[slot] = self->figure_stamp;
+}
+
 /* After a change: redraw the figures that now look different, and only those. A figure
  * that is not shown, or not drawn yet, is simply queued. */
 void
 cw_window_queue_figures (CwWindow *self)
 {
+  const CwMolecule *mol = cw_document_peek_molecule (self->doc);
+  g_autofree char  *spec = cw_molecule_dup_spec (mol);
+
   for (guint i = 0; i < G_N_ELEMENTS (window_figures); i++)
     {
       GtkDrawingArea *area = figure_area (self, window_figures[i]);
       guint           slot = figure_slot (window_figures[i]);
       int             width = gtk_widget_get_width (GTK_WIDGET (area));
       int             height = gtk_widget_get_height (GTK_WIDGET (area));
+      int             scale = gtk_widget_get_scale_factor (GTK_WIDGET (area));
+      gboolean        new_molecule = g_strcmp0 (spec, self->figure_spec[slot]) != 0;
       CwRenderOptions opt;
       CwScene        *scene;
 
+      g_free (self->figure_spec[slot]);
+      self->figure_spec[slot] = g_strdup (spec);
       g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
       if (!self->figure_drawn_valid[slot] || !gtk_widget_get_mapped (GTK_WIDGET (area)) ||
           width != self->figure_drawn_width[slot] || height != self->figure_drawn_height[slot])
@@ -269,6 +296,19 @@ cw_window_queue_figures (CwWindow *self)
           continue;
         }
       cw_window_render_options (self, GTK_WIDGET (area), &opt);
+      if (new_molecule && self->an_valid && width > 0 && height > 0)
+        {
+          /* Other groups on the ring: the figure will almost always look different, so there
+           * is no point in laying it out here to compare. The worker lays it out and paints
+           * it while this thread brings the other widgets up to date. */
+          keep_pending (self, slot,
+                        cw_paint_job_start_figure (window_figures[i], self->data, mol, &self->an, &opt, width, height,
+                                                   scale),
+                        &opt, width, height, scale);
+          self->n_worker_layouts++;
+          gtk_widget_queue_draw (GTK_WIDGET (area));
+          continue;
+        }
       scene = figure_scene (self, window_figures[i], width, height, &opt);
       if (opt.dark == self->figure_drawn_dark[slot] &&
           cw_scene_equal_within (scene, self->figure_drawn[slot], figure_tolerance (area, scene, width, height)))
@@ -284,12 +324,7 @@ cw_window_queue_figures (CwWindow *self)
           continue;
         }
       /* Painted on the worker thread while the other widgets are brought up to date. */
-      self->figure_pending_scale[slot] = gtk_widget_get_scale_factor (GTK_WIDGET (area));
-      self->figure_pending[slot] = cw_paint_job_start (scene, opt.dark, width, height, self->figure_pending_scale[slot]);
-      self->figure_pending_opt[slot] = opt;
-      self->figure_pending_width[slot] = width;
-      self->figure_pending_height[slot] = height;
-      self->figure_pending_stamp[slot] = self->figure_stamp;
+      keep_pending (self, slot, cw_paint_job_start (scene, opt.dark, width, height, scale), &opt, width, height, scale);
       gtk_widget_queue_draw (GTK_WIDGET (area));
     }
 }
@@ -310,6 +345,7 @@ cw_window_clear_figures (CwWindow *self)
     {
       g_clear_pointer (&self->figure_drawn[i], cw_scene_free);
       g_clear_pointer (&self->figure_pending[i], cw_paint_job_free);
+      g_clear_pointer (&self->figure_spec[i], g_free);
       self->figure_drawn_valid[i] = FALSE;
     }
 }

@@ -141,14 +141,17 @@ cw_window_refresh (CwWindow *self)
   if (n_custom != self->n_custom_shown)
     update_groups_store (self);
   cw_ring_canvas_set_molecule (self->ring_canvas, mol);
+  /* The figures first: those the worker paints, or lays out too, are then in progress while
+   * this thread brings the other widgets up to date. They may show the reaction geometry,
+   * which the pages compute. */
+  cw_window_update_pages (self);
+  cw_window_queue_figures (self);
   update_editor (self);
   update_temperature_widgets (self);
   cw_window_update_results (self);
   cw_window_update_title (self);
   cw_window_update_edit_actions (self);
   cw_window_update_smiles (self);
-  cw_window_update_pages (self);
-  cw_window_queue_figures (self);
 }
 
 void

@@ -8,7 +8,7 @@
 typedef enum
 {
   JOB_PAINT,  /* paint the scene given */
-  JOB_FIGURE, /* lay the figure out from borrowed inputs, then paint it */
+  JOB_FIGURE, /* lay the figure out from its own copies of the inputs, then paint it */
   JOB_WARM_UP /* lay out and paint every figure of a window for a molecule of its own */
 } JobKind;
 
@@ -21,13 +21,14 @@ struct _CwPaintJob
   CwScene        *scene;
   gboolean        dark;
   int             width, height, scale;
-  /* JOB_FIGURE: borrowed; JOB_WARM_UP: data borrowed, mol and cond owned */
+  /* data borrowed; JOB_FIGURE: mol, an and opt's reactivity copied; JOB_WARM_UP: mol and
+   * cond copied */
   CwFigure          fig;
   const CwData     *data;
-  const CwMolecule *mol;
-  const CwAnalysis *an;
-  CwRenderOptions   opt;
   CwMolecule       *own_mol;
+  CwAnalysis       *own_an; /* NULL when the figure is laid out without an analysis */
+  CwReactivity     *own_reactivity;
+  CwRenderOptions   opt;
   CwConditions      cond;
   GMutex            lock;
   GCond             cond_done;
@@ -46,6 +47,8 @@ job_unref (CwPaintJob *job)
   g_clear_pointer (&job->image, cairo_surface_destroy);
   g_clear_pointer (&job->scene, cw_scene_free);
   g_clear_pointer (&job->own_mol, cw_molecule_free);
+  g_free (job->own_an);
+  g_free (job->own_reactivity);
   g_mutex_clear (&job->lock);
   g_cond_clear (&job->cond_done);
   g_free (job);
@@ -67,7 +70,7 @@ run (gpointer data,
     switch (job->kind)
       {
       case JOB_FIGURE:
-        job->scene = cw_render_figure_scene (job->fig, job->data, job->mol, job->an, &job->opt, job->width, job->height);
+        job->scene = cw_render_figure_scene (job->fig, job->data, job->own_mol, job->own_an, &job->opt, job->width, job->height);
         if (job->scene != NULL)
           image = cw_render_figure_image (job->scene, job->dark, job->width, job->height, job->scale);
         break;
@@ -155,9 +158,15 @@ cw_paint_job_start_figure (CwFigure               fig,
   job = job_new (JOB_FIGURE, width, height, scale);
   job->fig = fig;
   job->data = data;
-  job->mol = mol;
-  job->an = an;
+  /* Copies, a few kilobytes: the window may change its own while the job runs. */
+  job->own_mol = cw_molecule_copy (mol);
+  job->own_an = an != NULL ? g_memdup2 (an, sizeof *an) : NULL;
   job->opt = *opt;
+  if (opt->reactivity != NULL)
+    {
+      job->own_reactivity = g_memdup2 (opt->reactivity, sizeof *opt->reactivity);
+      job->opt.reactivity = job->own_reactivity;
+    }
   job->dark = opt->dark;
   g_thread_pool_push (pool (), job, NULL);
   return job;

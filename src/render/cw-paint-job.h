@@ -18,9 +18,10 @@ typedef struct _CwPaintJob CwPaintJob;
  * device pixels per unit, as cw_render_figure_paint would paint it. */
 CwPaintJob      *cw_paint_job_start (CwScene *scene, gboolean dark, int width, int height, int scale);
 /* Lays fig out for mol and an on the worker, as cw_render_figure_scene would, then paints it
- * as cw_paint_job_start does. data, mol and an are borrowed: they must stay as they are until
- * the job has been waited for or freed (freeing a running job waits for it). Its scene is
- * known once cw_paint_job_wait has returned; there is no image when there is no scene. */
+ * as cw_paint_job_start does. mol, an and opt's reactivity are copied; data is borrowed: it
+ * must stay until the job has been waited for or freed (freeing a running job waits for it).
+ * Its scene is known once cw_paint_job_wait has returned; there is no image when there is
+ * no scene. */
 CwPaintJob      *cw_paint_job_start_figure (CwFigure fig, const CwData *data, const CwMolecule *mol,
                                             const CwAnalysis *an, const CwRenderOptions *opt,
                                             int width, int height, int scale);
@@ -34,7 +35,7 @@ cairo_surface_t *cw_paint_job_wait (CwPaintJob *job);
 /* Takes the scene back from a finished job (after cw_paint_job_wait). */
 CwScene         *cw_paint_job_steal_scene (CwPaintJob *job);
 /* Drops the job; a job not started yet is not run. Only a running figure or warm-up job,
- * which reads borrowed inputs, is waited for. */
+ * which reads the borrowed data, is waited for. */
 void             cw_paint_job_free (CwPaintJob *job);
 /* clang-format on */
 

@@ -123,7 +123,7 @@ test_worker_figures_same_pixels (void)
   g_autoptr (GError) error = NULL;
   g_autofree guint32 *from_worker = NULL, *from_window = NULL;
   int                 w1, h1, w2, h2;
-  guint               n, differ = 0;
+  guint               n, layouts, differ = 0;
 
   g_assert_true (cw_window_open_file (win, file, &error));
   g_assert_no_error (error);
@@ -136,11 +136,14 @@ test_worker_figures_same_pixels (void)
   g_assert_cmpuint (win->n_worker_figures, >=, 2);
 
   n = win->n_worker_figures;
+  layouts = win->n_worker_layouts;
   gtk_widget_activate_action (GTK_WIDGET (win), "win.set-group", "(iss)", 3, "up", "bromo");
   /* Past the table's giving back room (half a second), so the figures stay where they are. */
   app_test_pump (800, NULL);
-  /* The chairs and the energy profile changed, and came from the worker. */
+  /* The chairs and the energy profile changed, and came from the worker, which also laid
+   * them out: the groups on the ring changed. */
   g_assert_cmpuint (win->n_worker_figures, >=, n + 2);
+  g_assert_cmpuint (win->n_worker_layouts, ==, layouts + 2);
   from_worker = window_pixels (win, &w1, &h1);
 
   /* The same figures painted by the window itself. */
@@ -168,6 +171,14 @@ test_worker_figures_same_pixels (void)
           differ += from_worker[(gsize) y * w1 + x] != from_window[(gsize) y * w1 + x];
     }
   g_assert_cmpuint (differ, ==, 0);
+
+  /* A change of temperature keeps the groups: the figures are laid out here and compared with
+   * what is on screen, not laid out on the worker. 310.15 K: body temperature, 37 °C (common
+   * practice, no source needed); any other temperature would do. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", 310.15);
+  app_test_pump (300, NULL);
+  g_assert_cmpfloat_with_epsilon (cw_window_get_analysis (win)->temperature, 310.15, 1e-9);
+  g_assert_cmpuint (win->n_worker_layouts, ==, layouts + 2);
 
   win->close_confirmed = TRUE;
   gtk_window_destroy (GTK_WINDOW (win));

@@ -150,6 +150,54 @@ test_figure_job (void)
   }
 }
 
+/* A figure job works on copies of the molecule, the analysis and the reaction geometry: the
+ * caller may change or free its own as soon as the job is started (a window does, at its
+ * next edit). The worker is kept busy first, so that the job runs only after the caller's
+ * copies have been wiped; it still lays out the figure of the inputs as they were. */
+static void
+test_figure_job_copies (void)
+{
+  g_autoptr (CwData) data = rt_load_data ();
+  g_autoptr (CwMolecule) kept_mol = rt_ring (data, spec);
+  CwMolecule              *mol = rt_ring (data, spec);
+  CwAnalysis              *an = g_new0 (CwAnalysis, 1);
+  CwReactivity            *react = g_new0 (CwReactivity, 1);
+  g_autofree CwAnalysis   *kept_an = NULL;
+  g_autofree CwReactivity *kept_react = NULL;
+  const CwGeometryData    *gd = cw_render_default_geometry (NULL);
+  /* As in build() above. */
+  CwConditions    cond = { 298.15, CW_SOLVENT_APROTIC };
+  CwRenderOptions opt;
+  CwPaintJob     *busy_job, *job;
+  g_autoptr (CwScene) here = NULL;
+  static const Case c = { CW_FIGURE_CHAIRS, 640, 260, 1, FALSE };
+
+  g_assert_nonnull (gd);
+  rt_analyze (data, mol, 298.15, an);
+  g_assert_true (cw_reactivity_compute (gd, mol, an->pop, an->temperature, react, NULL));
+  kept_an = g_memdup2 (an, sizeof *an);
+  kept_react = g_memdup2 (react, sizeof *react);
+  cw_render_options_init (&opt);
+  opt.highlight_reactivity = TRUE;
+  opt.reactivity_sub = -1;
+  opt.reactivity = react;
+
+  busy_job = cw_paint_job_warm_up_figures (data, mol, &cond, 2);
+  job = cw_paint_job_start_figure (c.fig, data, mol, an, &opt, c.width, c.height, c.scale);
+  memset (an, 0xff, sizeof *an);
+  memset (react, 0, sizeof *react);
+  g_free (an);
+  g_free (react);
+  cw_molecule_free (mol);
+
+  opt.reactivity = kept_react;
+  here = cw_render_figure_scene (c.fig, data, kept_mol, kept_an, &opt, c.width, c.height);
+  g_assert_nonnull (here);
+  check_job (job, here, &c);
+  cw_paint_job_free (job);
+  cw_paint_job_free (busy_job);
+}
+
 /* Jobs dropped before, while and after they run; the ones kept still finish. */
 static void
 test_drop (void)
@@ -181,9 +229,9 @@ test_drop (void)
   cw_paint_job_free (NULL);
 }
 
-/* Jobs that read borrowed inputs are not left running on them: once such a job is freed, its
- * inputs can go (AddressSanitizer and valgrind would see the worker read freed memory). Each
- * job is freed a little later than the one before, so that some are freed while they run. */
+/* Jobs are not left running on the tables they borrow: once such a job is freed, the tables
+ * can go (AddressSanitizer and valgrind would see the worker read freed memory). Each job is
+ * freed a little later than the one before, so that some are freed while they run. */
 static void
 test_drop_borrowed (void)
 {
@@ -193,18 +241,21 @@ test_drop_borrowed (void)
 
   for (int round = 0; round < 40; round++)
     {
-      CwMolecule     *mol = rt_ring (data, spec);
+      CwData         *tables = rt_load_data ();
+      CwMolecule     *mol = rt_ring (tables, spec);
       CwAnalysis     *an = g_new0 (CwAnalysis, 1);
       CwRenderOptions opt;
       CwPaintJob     *job;
 
-      rt_analyze (data, mol, 298.15, an);
+      rt_analyze (tables, mol, 298.15, an);
       cw_render_options_init (&opt);
-      job = cw_paint_job_start_figure (CW_FIGURE_CHAIRS, data, mol, an, &opt, 500, 200, 1);
-      g_usleep (round * 50);
-      cw_paint_job_free (job);
+      job = cw_paint_job_start_figure (CW_FIGURE_CHAIRS, tables, mol, an, &opt, 500, 200, 1);
+      /* The job has its own molecule and analysis. */
       cw_molecule_free (mol);
       g_free (an);
+      g_usleep (round * 50);
+      cw_paint_job_free (job);
+      cw_data_free (tables);
     }
   for (int round = 0; round < 10; round++)
     {
@@ -224,6 +275,7 @@ main (int argc, char *argv[])
   g_test_init (&argc, &argv, NULL);
   g_test_add_func ("/render/paint-job/same-pixels", test_same_pixels);
   g_test_add_func ("/render/paint-job/figure", test_figure_job);
+  g_test_add_func ("/render/paint-job/figure-copies", test_figure_job_copies);
   g_test_add_func ("/render/paint-job/drop", test_drop);
   g_test_add_func ("/render/paint-job/drop-borrowed", test_drop_borrowed);
   return g_test_run ();
