@@ -380,6 +380,62 @@ cw_window_draw_scan_cb (GtkDrawingArea *area,
   draw_figure (CW_WINDOW (user_data), area, CW_FIGURE_SCAN, cr, width, height);
 }
 
+/* The window as last painted, or NULL while a redraw is pending: GTK hands out a widget's
+ * last painted frame, and forgets it as soon as anything in the window asks to be drawn
+ * again (a blinking cursor, a figure back from the worker). The paintable covers the
+ * window's shadow too, and scales what it draws to the size asked for: it is snapshot at
+ * its own size. */
+static GskRenderNode *
+painted_node (GtkWidget *widget)
+{
+  g_autoptr (GdkPaintable) paintable = gtk_widget_paintable_new (widget);
+  GtkSnapshot *snapshot = gtk_snapshot_new ();
+
+  gdk_paintable_snapshot (paintable, snapshot, gdk_paintable_get_intrinsic_width (paintable),
+                          gdk_paintable_get_intrinsic_height (paintable));
+  return gtk_snapshot_free_to_node (snapshot);
+}
+
+typedef struct
+{
+  GtkWidget     *widget;
+  GskRenderNode *node;
+  gboolean       painted;
+} FrameGrab;
+
+static void
+grab_after_paint_cb (GdkFrameClock *clock,
+                     gpointer       data)
+{
+  FrameGrab *grab = data;
+
+  if (grab->painted)
+    return;
+  grab->painted = TRUE;
+  grab->node = painted_node (grab->widget);
+}
+
+/* Paints a frame now and returns it (NULL if none came within two seconds): taken right
+ * after the paint, before anything else can ask for a redraw. */
+static GskRenderNode *
+next_painted_node (GtkWidget *widget)
+{
+  GdkFrameClock *clock = gtk_widget_get_frame_clock (widget);
+  FrameGrab      grab = { widget, NULL, FALSE };
+  gint64         end = g_get_monotonic_time () + 2 * G_USEC_PER_SEC;
+  gulong         handler;
+
+  if (clock == NULL)
+    return NULL;
+  handler = g_signal_connect (clock, "after-paint", G_CALLBACK (grab_after_paint_cb), &grab);
+  gtk_widget_queue_draw (widget);
+  while (!grab.painted && g_get_monotonic_time () < end)
+    if (!g_main_context_iteration (NULL, FALSE))
+      g_usleep (1000);
+  g_signal_handler_disconnect (clock, handler);
+  return grab.node;
+}
+
 gboolean
 cw_window_save_screenshot (CwWindow   *self,
                            const char *path,
@@ -387,10 +443,8 @@ cw_window_save_screenshot (CwWindow   *self,
 {
   GtkWidget *widget = GTK_WIDGET (self);
   int        w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
-  g_autoptr (GdkPaintable) paintable = NULL;
   g_autoptr (GskRenderNode) node = NULL;
   g_autoptr (GdkTexture) texture = NULL;
-  GtkSnapshot    *snapshot;
   graphene_rect_t bounds;
 
   if (w <= 0 || h <= 0 || gtk_native_get_renderer (GTK_NATIVE (self)) == NULL)
@@ -398,15 +452,12 @@ cw_window_save_screenshot (CwWindow   *self,
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window is not shown yet"));
       return FALSE;
     }
-  /* The paintable covers the window's shadow too, and scales what it draws to the size
-   * asked for: snapshot it at its own size and render the window's box, unscaled. */
+  /* The window's box, unscaled, out of what the paintable covers. */
   if (!gtk_widget_compute_bounds (widget, widget, &bounds))
     bounds = GRAPHENE_RECT_INIT (0, 0, w, h);
-  paintable = gtk_widget_paintable_new (widget);
-  snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, gdk_paintable_get_intrinsic_width (paintable),
-                          gdk_paintable_get_intrinsic_height (paintable));
-  node = gtk_snapshot_free_to_node (snapshot);
+  node = painted_node (widget);
+  if (node == NULL)
+    node = next_painted_node (widget);
   if (node == NULL)
     {
       g_set_error (error, G_IO_ERROR, G_IO_ERROR_FAILED, _("The window drew nothing"));
