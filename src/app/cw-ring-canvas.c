@@ -13,6 +13,14 @@ struct _CwRingCanvas
   CwMolecule *mol;
   GHashTable *layouts; /* markup → PangoLayout: shaping the text is most of a redraw */
   int         selected;
+  /* Drawings kept from one frame to the next: the ring with its numbers and the selection,
+   * and each carbon's groups, each with what it was drawn from. GTK repaints only where a
+   * drawing is new, so an edit on one carbon repaints that carbon's groups alone. */
+  GskRenderNode *base_node;
+  char          *base_key;
+  GskRenderNode *carbon_node[CW_RING_SIZE];
+  char          *carbon_key[CW_RING_SIZE];
+  guint          n_drawn; /* drawings made (for tests) */
 };
 
 G_DEFINE_FINAL_TYPE (CwRingCanvas, cw_ring_canvas, GTK_TYPE_WIDGET)
@@ -147,71 +155,132 @@ draw_label (CwRingCanvas *self,
   pango_cairo_show_layout (cr, layout);
 }
 
+/* Where a group's bond ends and its label sits, for face f (0 up, 1 down) of position. */
 static void
-draw_substituents (CwRingCanvas   *self,
-                   cairo_t        *cr,
-                   const Geometry *g,
-                   int             position)
+group_points (const Geometry      *g,
+              int                  position,
+              const CwSubstituent *up,
+              const CwSubstituent *down,
+              int                  f,
+              double              *x1,
+              double              *y1,
+              double              *lx,
+              double              *ly)
+{
+  double a = -G_PI / 2.0 + (position - 1) * G_PI / 3.0, x0, y0;
+
+  carbon_point (g, position, &x0, &y0);
+  /* A geminal pair splits its two bonds either side of the radial direction. */
+  if (up != NULL && down != NULL)
+    a += f == 0 ? -0.38 : 0.38;
+  *x1 = x0 + g->r * 0.42 * cos (a);
+  *y1 = y0 + g->r * 0.42 * sin (a);
+  *lx = x0 + g->r * 0.70 * cos (a);
+  *ly = y0 + g->r * 0.70 * sin (a);
+}
+
+static const char *
+group_markup (const CwSubstituent *s)
+{
+  return s->group->markup ? s->group->markup : s->group->label;
+}
+
+/* A drawing of its own, in the widget's coordinates, clipped to bounds. */
+static GskRenderNode *
+new_drawing (const graphene_rect_t *bounds,
+             cairo_t              **cr)
+{
+  GskRenderNode *node = gsk_cairo_node_new (bounds);
+
+  *cr = gsk_cairo_node_get_draw_context (node);
+  return node;
+}
+
+/* The groups on one carbon: their wedges and labels, in a box just large enough. NULL when
+ * the carbon has none. */
+static GskRenderNode *
+draw_carbon (CwRingCanvas   *self,
+             const Geometry *g,
+             const GdkRGBA  *fg,
+             int             position)
 {
   const CwSubstituent *up = cw_molecule_get (self->mol, position, CW_FACE_UP);
   const CwSubstituent *down = cw_molecule_get (self->mol, position, CW_FACE_DOWN);
-  double               base = -G_PI / 2.0 + (position - 1) * G_PI / 3.0;
-  double               x0, y0;
+  double               x0, y0, left, top, right, bottom;
+  GskRenderNode       *node;
+  cairo_t             *cr;
 
+  if (up == NULL && down == NULL)
+    return NULL;
   carbon_point (g, position, &x0, &y0);
+  left = right = x0;
+  top = bottom = y0;
   for (int f = 0; f < 2; f++)
     {
       const CwSubstituent *s = f == 0 ? up : down;
-      double               a = base, x1, y1, lx, ly;
+      double               x1, y1, lx, ly;
+      int                  w, h;
 
       if (s == NULL)
         continue;
-      /* A geminal pair splits its two bonds either side of the radial direction. */
-      if (up != NULL && down != NULL)
-        a += f == 0 ? -0.38 : 0.38;
-      x1 = x0 + g->r * 0.42 * cos (a);
-      y1 = y0 + g->r * 0.42 * sin (a);
-      lx = x0 + g->r * 0.70 * cos (a);
-      ly = y0 + g->r * 0.70 * sin (a);
-      draw_wedge (cr, x0, y0, x1, y1, s->face == CW_FACE_DOWN);
-      draw_label (self, cr, s->group->markup ? s->group->markup : s->group->label, lx, ly, FALSE);
+      group_points (g, position, up, down, f, &x1, &y1, &lx, &ly);
+      pango_layout_get_pixel_size (get_layout (self, group_markup (s), FALSE), &w, &h);
+      left = MIN (MIN (left, x1), lx - w / 2.0);
+      right = MAX (MAX (right, x1), lx + w / 2.0);
+      top = MIN (MIN (top, y1), ly - h / 2.0);
+      bottom = MAX (MAX (bottom, y1), ly + h / 2.0);
     }
+  /* Room for the wedge's width and the antialiased edges. */
+  left = floor (left) - 8;
+  top = floor (top) - 8;
+  node = new_drawing (&GRAPHENE_RECT_INIT (left, top, ceil (right) + 8 - left, ceil (bottom) + 8 - top), &cr);
+  gdk_cairo_set_source_rgba (cr, fg);
+  for (int f = 0; f < 2; f++)
+    {
+      const CwSubstituent *s = f == 0 ? up : down;
+      double               x1, y1, lx, ly;
+
+      if (s == NULL)
+        continue;
+      group_points (g, position, up, down, f, &x1, &y1, &lx, &ly);
+      draw_wedge (cr, x0, y0, x1, y1, s->face == CW_FACE_DOWN);
+      draw_label (self, cr, group_markup (s), lx, ly, FALSE);
+    }
+  cairo_destroy (cr);
+  self->n_drawn++;
+  return node;
 }
 
-static void
-cw_ring_canvas_snapshot (GtkWidget   *widget,
-                         GtkSnapshot *snapshot)
+/* The ring, its position numbers and the selected carbon's mark. */
+static GskRenderNode *
+draw_base (CwRingCanvas   *self,
+           const Geometry *g,
+           const GdkRGBA  *fg,
+           const GdkRGBA  *accent,
+           int             w,
+           int             h)
 {
-  CwRingCanvas *self = CW_RING_CANVAS (widget);
-  int           w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
-  GdkRGBA       fg, accent;
-  Geometry      g;
-  cairo_t      *cr;
-
-  if (w <= 0 || h <= 0)
-    return;
-  get_geometry (self, &g);
-  get_colors (widget, &fg, &accent);
-  cr = gtk_snapshot_append_cairo (snapshot, &GRAPHENE_RECT_INIT (0, 0, w, h));
+  cairo_t       *cr;
+  GskRenderNode *node = new_drawing (&GRAPHENE_RECT_INIT (0, 0, w, h), &cr);
 
   if (self->selected >= 1)
     {
       double sx, sy;
 
-      carbon_point (&g, self->selected, &sx, &sy);
-      cairo_set_source_rgba (cr, accent.red, accent.green, accent.blue, 0.28);
-      cairo_arc (cr, sx, sy, MAX (14.0, g.r * 0.2), 0, 2 * G_PI);
+      carbon_point (g, self->selected, &sx, &sy);
+      cairo_set_source_rgba (cr, accent->red, accent->green, accent->blue, 0.28);
+      cairo_arc (cr, sx, sy, MAX (14.0, g->r * 0.2), 0, 2 * G_PI);
       cairo_fill (cr);
     }
 
-  gdk_cairo_set_source_rgba (cr, &fg);
+  gdk_cairo_set_source_rgba (cr, fg);
   cairo_set_line_width (cr, 2.0);
   cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
   for (int p = 1; p <= CW_RING_SIZE; p++)
     {
       double x, y;
 
-      carbon_point (&g, p, &x, &y);
+      carbon_point (g, p, &x, &y);
       if (p == 1)
         cairo_move_to (cr, x, y);
       else
@@ -225,17 +294,93 @@ cw_ring_canvas_snapshot (GtkWidget   *widget,
       double x, y, a = -G_PI / 2.0 + (p - 1) * G_PI / 3.0;
       char   num[4];
 
-      carbon_point (&g, p, &x, &y);
+      carbon_point (g, p, &x, &y);
       g_snprintf (num, sizeof num, "%d", p);
       /* Position numbers sit just inside the ring. */
-      cairo_save (cr);
-      cairo_set_source_rgba (cr, fg.red, fg.green, fg.blue, p == self->selected ? 1.0 : 0.6);
-      draw_label (self, cr, num, x - 0.2 * g.r * cos (a), y - 0.2 * g.r * sin (a), p == self->selected);
-      cairo_restore (cr);
-      if (self->mol != NULL)
-        draw_substituents (self, cr, &g, p);
+      cairo_set_source_rgba (cr, fg->red, fg->green, fg->blue, p == self->selected ? 1.0 : 0.6);
+      draw_label (self, cr, num, x - 0.2 * g->r * cos (a), y - 0.2 * g->r * sin (a), p == self->selected);
     }
   cairo_destroy (cr);
+  self->n_drawn++;
+  return node;
+}
+
+/* Replaces *node with a new drawing unless key is what it was drawn from. */
+static gboolean
+keep_drawing (GskRenderNode **node,
+              char          **old_key,
+              char           *key)
+{
+  if (g_strcmp0 (*old_key, key) == 0)
+    {
+      g_free (key);
+      return TRUE;
+    }
+  g_clear_pointer (node, gsk_render_node_unref);
+  g_free (*old_key);
+  *old_key = key;
+  return FALSE;
+}
+
+static void
+forget_drawings (CwRingCanvas *self)
+{
+  g_clear_pointer (&self->base_node, gsk_render_node_unref);
+  g_clear_pointer (&self->base_key, g_free);
+  for (int i = 0; i < CW_RING_SIZE; i++)
+    {
+      g_clear_pointer (&self->carbon_node[i], gsk_render_node_unref);
+      g_clear_pointer (&self->carbon_key[i], g_free);
+    }
+}
+
+static char *
+color_key (const GdkRGBA *c)
+{
+  return g_strdup_printf ("%.4f,%.4f,%.4f,%.4f", c->red, c->green, c->blue, c->alpha);
+}
+
+static void
+cw_ring_canvas_snapshot (GtkWidget   *widget,
+                         GtkSnapshot *snapshot)
+{
+  CwRingCanvas    *self = CW_RING_CANVAS (widget);
+  int              w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  GdkRGBA          fg, accent;
+  Geometry         g;
+  g_autofree char *fg_key = NULL, *accent_key = NULL;
+
+  if (w <= 0 || h <= 0)
+    return;
+  get_geometry (self, &g);
+  get_colors (widget, &fg, &accent);
+  fg_key = color_key (&fg);
+  accent_key = color_key (&accent);
+
+  if (!keep_drawing (&self->base_node, &self->base_key,
+                     g_strdup_printf ("%dx%d %s %s %d", w, h, fg_key, accent_key, self->selected)))
+    self->base_node = draw_base (self, &g, &fg, &accent, w, h);
+  gtk_snapshot_append_node (snapshot, self->base_node);
+
+  for (int p = 1; p <= CW_RING_SIZE; p++)
+    {
+      const CwSubstituent *up = self->mol ? cw_molecule_get (self->mol, p, CW_FACE_UP) : NULL;
+      const CwSubstituent *down = self->mol ? cw_molecule_get (self->mol, p, CW_FACE_DOWN) : NULL;
+
+      if (!keep_drawing (&self->carbon_node[p - 1], &self->carbon_key[p - 1],
+                         g_strdup_printf ("%dx%d %s %s|%s", w, h, fg_key, up ? group_markup (up) : "",
+                                          down ? group_markup (down) : "")))
+        self->carbon_node[p - 1] = self->mol ? draw_carbon (self, &g, &fg, p) : NULL;
+      if (self->carbon_node[p - 1] != NULL)
+        gtk_snapshot_append_node (snapshot, self->carbon_node[p - 1]);
+    }
+}
+
+guint
+cw_ring_canvas_get_n_drawn (CwRingCanvas *self)
+{
+  g_return_val_if_fail (CW_IS_RING_CANVAS (self), 0);
+  return self->n_drawn;
 }
 
 static void
@@ -314,6 +459,7 @@ cw_ring_canvas_finalize (GObject *object)
 
   g_clear_pointer (&self->mol, cw_molecule_free);
   g_clear_pointer (&self->layouts, g_hash_table_unref);
+  forget_drawings (self);
 
   G_OBJECT_CLASS (cw_ring_canvas_parent_class)->finalize (object);
 }
@@ -363,6 +509,7 @@ cw_ring_canvas_css_changed (GtkWidget         *widget,
   GTK_WIDGET_CLASS (cw_ring_canvas_parent_class)->css_changed (widget, change);
   /* A new font or scale: lay the labels out again. */
   g_hash_table_remove_all (self->layouts);
+  forget_drawings (self);
   gtk_widget_queue_draw (widget);
 }
 

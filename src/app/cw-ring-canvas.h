@@ -20,6 +20,9 @@ void       cw_ring_canvas_set_molecule (CwRingCanvas     *self,
 int        cw_ring_canvas_get_selected (CwRingCanvas *self);
 void       cw_ring_canvas_set_selected (CwRingCanvas *self,
                                         int           position);
+/* How many drawings of the ring or of a carbon's groups the canvas has made (for tests: an
+ * edit on one carbon draws that carbon again, and nothing else). */
+guint cw_ring_canvas_get_n_drawn (CwRingCanvas *self);
 /* Position (1-6) of the carbon nearest to (x, y) in widget coordinates, or 0. */
 int cw_ring_canvas_hit_test (CwRingCanvas *self,
                              double        x,

@@ -191,6 +191,92 @@ test_worker_figures_same_pixels (void)
   gtk_window_destroy (GTK_WINDOW (win));
 }
 
+/* A window on the demo, at a fixed size, shown and drawn. */
+static CwWindow *
+demo_window (void)
+{
+  CwWindow        *win = g_object_new (CW_TYPE_WINDOW, NULL);
+  g_autofree char *demo = g_build_filename (cw_data_find_dir (), "demo.json", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (demo);
+  g_autoptr (GError) error = NULL;
+
+  g_assert_true (cw_window_open_file (win, file, &error));
+  g_assert_no_error (error);
+  gtk_window_set_default_size (GTK_WINDOW (win), 1100, 760);
+  gtk_window_present (GTK_WINDOW (win));
+  app_test_wait_mapped (GTK_WIDGET (win));
+  return win;
+}
+
+/* Runs action on win and returns how many drawings the ring canvas made for it. */
+static guint
+ring_drawings (CwWindow   *win,
+               const char *action,
+               const char *format,
+               ...)
+{
+  guint     before = cw_ring_canvas_get_n_drawn (win->ring_canvas);
+  va_list   args;
+  GVariant *param;
+
+  va_start (args, format);
+  param = g_variant_new_va (format, NULL, &args);
+  va_end (args);
+  gtk_widget_activate_action_variant (GTK_WIDGET (win), action, param);
+  app_test_pump (200, NULL);
+  return cw_ring_canvas_get_n_drawn (win->ring_canvas) - before;
+}
+
+/* The ring canvas keeps its drawings from frame to frame: an edit on one carbon draws that
+ * carbon's groups again and nothing else, a new selection the ring alone. What it shows is
+ * what a window drawing the same molecule afresh shows. */
+static void
+test_ring_drawings (void)
+{
+  CwWindow        *win = demo_window (), *fresh;
+  g_autofree char *path = app_test_tmp_path ("ring-edits.json");
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  g_autofree guint32 *edited = NULL, *drawn = NULL;
+  int                 w1, h1, w2, h2;
+  guint               differ = 0;
+  graphene_rect_t     b;
+
+  g_assert_cmpuint (ring_drawings (win, "win.set-group", "(iss)", 3, "up", "bromo"), ==, 1);
+  g_assert_cmpuint (ring_drawings (win, "win.set-group", "(iss)", 5, "down", "methyl"), ==, 1);
+  /* A geminal pair on carbon 5: both of its groups are drawn again, split. */
+  g_assert_cmpuint (ring_drawings (win, "win.set-group", "(iss)", 5, "up", "hydroxy"), ==, 1);
+  g_assert_cmpuint (ring_drawings (win, "win.remove-group", "(is)", 3, "up"), ==, 0);
+  g_assert_cmpuint (ring_drawings (win, "win.select-carbon", "i", 2), ==, 1);
+  /* A change of temperature leaves the ring as it is. */
+  g_assert_cmpuint (ring_drawings (win, "win.set-temperature", "d", 310.15), ==, 0);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save-to", "s", path);
+  fresh = g_object_new (CW_TYPE_WINDOW, NULL);
+  g_assert_true (cw_window_open_file (fresh, file, &error));
+  g_assert_no_error (error);
+  gtk_window_set_default_size (GTK_WINDOW (fresh), 1100, 760);
+  gtk_window_present (GTK_WINDOW (fresh));
+  app_test_wait_mapped (GTK_WIDGET (fresh));
+  gtk_widget_activate_action (GTK_WIDGET (fresh), "win.select-carbon", "i", 2);
+  app_test_pump (300, NULL);
+
+  edited = window_pixels (win, &w1, &h1);
+  drawn = window_pixels (fresh, &w2, &h2);
+  g_assert_cmpint (w1, ==, w2);
+  g_assert_cmpint (h1, ==, h2);
+  g_assert_true (gtk_widget_compute_bounds (GTK_WIDGET (win->ring_canvas), GTK_WIDGET (win), &b));
+  for (int y = (int) b.origin.y; y < (int) (b.origin.y + b.size.height) && y < h1; y++)
+    for (int x = (int) b.origin.x; x < (int) (b.origin.x + b.size.width) && x < w1; x++)
+      differ += edited[(gsize) y * w1 + x] != drawn[(gsize) y * w1 + x];
+  g_assert_cmpuint (differ, ==, 0);
+
+  win->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (win));
+  fresh->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (fresh));
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -198,5 +284,6 @@ main (int argc, char *argv[])
     return 0;
   g_test_add_func ("/app/screenshot/not-blank", test_screenshot_not_blank);
   g_test_add_func ("/app/screenshot/worker-figures", test_worker_figures_same_pixels);
+  g_test_add_func ("/app/screenshot/ring-drawings", test_ring_drawings);
   return g_test_run ();
 }
