@@ -215,12 +215,13 @@ ring_drawings (CwWindow   *win,
                const char *format,
                ...)
 {
-  guint     before = cw_ring_canvas_get_n_drawn (win->ring_canvas);
-  va_list   args;
-  GVariant *param;
+  guint   before = cw_ring_canvas_get_n_drawn (win->ring_canvas);
+  va_list args;
+  g_autoptr (GVariant) param = NULL;
 
   va_start (args, format);
-  param = g_variant_new_va (format, NULL, &args);
+  /* Owned here: activating an action does not take a floating reference. */
+  param = g_variant_ref_sink (g_variant_new_va (format, NULL, &args));
   va_end (args);
   gtk_widget_activate_action_variant (GTK_WIDGET (win), action, param);
   app_test_pump (200, NULL);
