@@ -196,19 +196,19 @@ new_drawing (const graphene_rect_t *bounds,
   return node;
 }
 
-/* The groups on one carbon: their wedges and labels, in a box just large enough. NULL when
- * the carbon has none. */
+/* The groups up and down (either may be NULL) on one carbon: their wedges and labels, in
+ * a box just large enough. NULL when the carbon has none. */
 static GskRenderNode *
-draw_carbon (CwRingCanvas   *self,
-             const Geometry *g,
-             const GdkRGBA  *fg,
-             int             position)
+draw_carbon (CwRingCanvas        *self,
+             const Geometry      *g,
+             const GdkRGBA       *fg,
+             int                  position,
+             const CwSubstituent *up,
+             const CwSubstituent *down)
 {
-  const CwSubstituent *up = cw_molecule_get (self->mol, position, CW_FACE_UP);
-  const CwSubstituent *down = cw_molecule_get (self->mol, position, CW_FACE_DOWN);
-  double               x0, y0, left, top, right, bottom;
-  GskRenderNode       *node;
-  cairo_t             *cr;
+  double         x0, y0, left, top, right, bottom;
+  GskRenderNode *node;
+  cairo_t       *cr;
 
   if (up == NULL && down == NULL)
     return NULL;
@@ -370,7 +370,7 @@ cw_ring_canvas_snapshot (GtkWidget   *widget,
       if (!keep_drawing (&self->carbon_node[p - 1], &self->carbon_key[p - 1],
                          g_strdup_printf ("%dx%d %s %s|%s", w, h, fg_key, up ? group_markup (up) : "",
                                           down ? group_markup (down) : "")))
-        self->carbon_node[p - 1] = self->mol ? draw_carbon (self, &g, &fg, p) : NULL;
+        self->carbon_node[p - 1] = draw_carbon (self, &g, &fg, p, up, down);
       if (self->carbon_node[p - 1] != NULL)
         gtk_snapshot_append_node (snapshot, self->carbon_node[p - 1]);
     }

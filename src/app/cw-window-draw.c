@@ -286,8 +286,6 @@ cw_window_queue_figures (CwWindow *self)
       CwRenderOptions opt;
       CwScene        *scene;
 
-      g_free (self->figure_spec[slot]);
-      self->figure_spec[slot] = g_strdup (spec);
       g_clear_pointer (&self->figure_pending[slot], cw_paint_job_free);
       if (!self->figure_drawn_valid[slot] || !gtk_widget_get_mapped (GTK_WIDGET (area)) ||
           width != self->figure_drawn_width[slot] || height != self->figure_drawn_height[slot])

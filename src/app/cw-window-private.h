@@ -92,7 +92,7 @@ struct _CwWindow
   guint           figure_stamp;
   guint           n_worker_figures; /* figures drawn from the worker's image (for tests) */
   guint           n_worker_layouts; /* figures also laid out on the worker after a change (for tests) */
-  char           *figure_spec[3];   /* the molecule each figure shows, or is about to (a ring spec) */
+  char           *figure_spec[3];   /* the molecule each figure was last drawn for (a ring spec) */
   CwPaintJob     *warm_up_job;      /* loads the worker's fonts while the window is built */
   guint           warm_up_id;       /* idle that loads the window's own fonts for the figures, once */
   gboolean        warm_up_done;
