@@ -249,7 +249,8 @@ test_ring_drawings (void)
   g_assert_cmpuint (ring_drawings (win, "win.set-group", "(iss)", 5, "up", "hydroxy"), ==, 1);
   g_assert_cmpuint (ring_drawings (win, "win.remove-group", "(is)", 3, "up"), ==, 0);
   g_assert_cmpuint (ring_drawings (win, "win.select-carbon", "i", 2), ==, 1);
-  /* A change of temperature leaves the ring as it is. */
+  /* A change of temperature leaves the ring as it is. 310.15 K: body temperature, as in the
+   * test above (common practice, no source needed). */
   g_assert_cmpuint (ring_drawings (win, "win.set-temperature", "d", 310.15), ==, 0);
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.save-to", "s", path);
