@@ -22,6 +22,7 @@ struct _CwWindow
   GtkLabel       *title_label;
   CwSteadyLabel  *subtitle_label;
   GtkMenuButton  *temperature_button;
+  CwSteadyLabel  *temperature_label;
   GtkMenuButton  *primary_menu_button;
   GtkMenuButton  *export_menu_button;
   GMenuModel     *primary_menu;

@@ -85,6 +85,9 @@ update_temperature_widgets (CwWindow *self)
   double            offset = tu == CW_TUNIT_CELSIUS ? CW_ZERO_C : 0.0;
   g_autofree char  *label = cw_format_temperature (k, tu);
 
+  /* The button shows the document's temperature however it was set; while the slider is
+   * dragged the adjustment already holds it. */
+  cw_steady_label_set_text (self->temperature_label, label);
   if (gtk_adjustment_get_value (self->temperature_adjustment) == k - offset &&
       gtk_adjustment_get_lower (self->temperature_adjustment) == 100.0 - offset)
     return;
@@ -92,7 +95,6 @@ update_temperature_widgets (CwWindow *self)
   gtk_adjustment_configure (self->temperature_adjustment, k - offset, 100.0 - offset, 600.0 - offset,
                             1.0, 10.0, 0.0);
   self->updating_temperature = FALSE;
-  gtk_menu_button_set_label (self->temperature_button, label);
 }
 
 void
@@ -512,6 +514,7 @@ cw_window_class_init (CwWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, CwWindow, title_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, subtitle_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_button);
+  gtk_widget_class_bind_template_child (widget_class, CwWindow, temperature_label);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, primary_menu_button);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, export_menu_button);
   gtk_widget_class_bind_template_child (widget_class, CwWindow, primary_menu);

@@ -102,6 +102,43 @@ test_edit_updates_results (void)
   destroy_window (win);
 }
 
+/* The temperature slider moves the document's temperature, and the header's temperature
+ * button follows it while the slider is dragged (not only when the temperature is set
+ * elsewhere). 310.15 K = 37.0 °C, 273.15 K = 0 °C (CODATA: the definition of the Celsius
+ * scale). */
+static void
+test_temperature_slider (void)
+{
+  CwWindow *win = new_window ();
+
+  g_settings_set_string (win->settings, "temperature-unit", "celsius");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.set-temperature", "d", 310.15);
+  g_assert_cmpfloat_with_epsilon (gtk_adjustment_get_value (win->temperature_adjustment), 37.0, 1e-9);
+  g_assert_nonnull (strstr (cw_steady_label_get_text (win->temperature_label), "37.0"));
+
+  /* What a drag does: the adjustment moves a step at a time. */
+  for (int i = 1; i <= 3; i++)
+    {
+      g_autofree char *expected = g_strdup_printf ("%.1f", 37.0 + i);
+
+      gtk_adjustment_set_value (win->temperature_adjustment, 37.0 + i);
+      g_assert_cmpfloat_with_epsilon (cw_document_get_temperature (cw_window_get_document (win)), 310.15 + i, 1e-9);
+      g_assert_nonnull (strstr (cw_steady_label_get_text (win->temperature_label), expected));
+    }
+  /* Undo takes back the drag (temperature changes less than a second apart are one step),
+   * and the slider and the button follow the document. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  {
+    double           c = cw_document_get_temperature (cw_window_get_document (win)) - 273.15;
+    g_autofree char *expected = g_strdup_printf ("%.1f", c);
+
+    g_assert_cmpfloat (c, <, 38.0);
+    g_assert_cmpfloat_with_epsilon (gtk_adjustment_get_value (win->temperature_adjustment), c, 1e-9);
+    g_assert_nonnull (strstr (cw_steady_label_get_text (win->temperature_label), expected));
+  }
+  destroy_window (win);
+}
+
 static void
 test_undo_redo (void)
 {
@@ -787,6 +824,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/result-sheet", test_result_sheet);
   g_test_add_func ("/app/window/steady-label", test_steady_label);
   g_test_add_func ("/app/window/undo-redo", test_undo_redo);
+  g_test_add_func ("/app/window/temperature-slider", test_temperature_slider);
   g_test_add_func ("/app/window/geminal-and-custom", test_geminal_and_custom);
   g_test_add_func ("/app/window/custom-group-dialog", test_custom_group_dialog);
   g_test_add_func ("/app/window/save-open-round-trip", test_save_open_round_trip);
