@@ -7,6 +7,7 @@
  * temperature changes as a drag of the slider makes them (the adjustment moved one
  * step at a time, with the temperature popover open). Every edit changes the analysis.
  * Targets, for each series: median <= 4 ms, maximum <= 16 ms. */
+#define _GNU_SOURCE /* RUSAGE_THREAD */
 #include "config.h"
 
 #include "bench-common.h"
@@ -14,6 +15,7 @@
 #include <gtk/gtk.h>
 #include <stdio.h>
 #include <stdlib.h>
+#include <sys/resource.h>
 #include <time.h>
 
 #include "cw-app-data.h"
@@ -63,6 +65,55 @@ wait_frame (void)
 
   while (!painted && g_get_monotonic_time () < end)
     g_main_context_iteration (NULL, TRUE);
+}
+
+/* What the process and its main thread have used so far: page faults (a first touch of new
+ * memory shows here) and the main thread's involuntary context switches (times the system
+ * took its core for something else). */
+typedef struct
+{
+  double cpu_ms;         /* the process, all threads */
+  double main_cpu_ms;    /* the main thread */
+  long   faults;         /* the process, minor and major */
+  long   main_preempted; /* the main thread's involuntary context switches */
+} Usage;
+
+static void
+usage_now (Usage *u)
+{
+  struct rusage ru;
+
+  u->cpu_ms = bench_cpu_ms ();
+  u->main_cpu_ms = bench_thread_cpu_ms ();
+  getrusage (RUSAGE_SELF, &ru);
+  u->faults = ru.ru_minflt + ru.ru_majflt;
+  getrusage (RUSAGE_THREAD, &ru);
+  u->main_preempted = ru.ru_nivcsw;
+}
+
+static void
+usage_since (Usage *u)
+{
+  Usage now;
+
+  usage_now (&now);
+  u->cpu_ms = now.cpu_ms - u->cpu_ms;
+  u->main_cpu_ms = now.main_cpu_ms - u->main_cpu_ms;
+  u->faults = now.faults - u->faults;
+  u->main_preempted = now.main_preempted - u->main_preempted;
+}
+
+static void
+print_edit (const char  *prefix,
+            const char  *what,
+            int          i,
+            double       total,
+            double       edit,
+            const Usage *u)
+{
+  printf ("%s%s %d: %.2f ms (edit %.2f ms, frame %.2f ms; CPU: main thread %.2f ms, process %.2f ms; "
+          "%ld page faults; main thread preempted %ld times)\n",
+          prefix, what, i, total, edit, total - edit, u->main_cpu_ms, u->cpu_ms, u->faults, u->main_preempted);
 }
 
 static int
@@ -116,6 +167,9 @@ run_series (CwWindow   *win,
             const char *prefix)
 {
   double times[N_EDITS], edit_only[N_EDITS], cpu[N_EDITS];
+  Usage  usage, slowest_usage = { 0 };
+  double slowest = -1.0, slowest_edit = 0.0;
+  int    slowest_i = 0;
   guint  serial = 0;
 
   for (int i = 0; i < N_EDITS; i++)
@@ -129,17 +183,24 @@ run_series (CwWindow   *win,
       serial = win->serial;
       frame_start = 0;
       painted = FALSE;
-      cpu[i] = bench_cpu_ms ();
+      usage_now (&usage);
       t0 = g_get_monotonic_time ();
       do_edit (win, series, i);
       t1 = g_get_monotonic_time ();
       wait_frame ();
-      cpu[i] = bench_cpu_ms () - cpu[i];
+      usage_since (&usage);
+      cpu[i] = usage.cpu_ms;
       edit_only[i] = (t1 - t0) / 1000.0;
       times[i] = edit_only[i] + (painted ? (paint_end - frame_start) / 1000.0 : 1000.0);
       if (slow_ms > 0 && times[i] > slow_ms)
-        printf ("%sslow edit %d: %.2f ms (edit %.2f ms, frame %.2f ms)\n", prefix, i, times[i], edit_only[i],
-                times[i] - edit_only[i]);
+        print_edit (prefix, "slow edit", i, times[i], edit_only[i], &usage);
+      if (times[i] > slowest)
+        {
+          slowest = times[i];
+          slowest_edit = edit_only[i];
+          slowest_i = i;
+          slowest_usage = usage;
+        }
       /* Each edit is a real change of the document, and the temperature ones change K. */
       an = cw_window_get_analysis (win);
       if (win->serial == serial || (series == SERIES_TEMPERATURE && (an == NULL || an->K == before)))
@@ -159,6 +220,9 @@ run_series (CwWindow   *win,
   printf ("%sedit+frame median: %.2f ms\n", prefix, times[N_EDITS / 2]);
   printf ("%sedit+frame p90: %.2f ms\n", prefix, times[N_EDITS * 9 / 10]);
   printf ("%sedit+frame max: %.2f ms\n", prefix, times[N_EDITS - 1]);
+  /* Where the slowest edit's time went: work of the main thread, or waiting (for the worker,
+   * the X server, or a core the system gave to other load). */
+  print_edit (prefix, "slowest: edit", slowest_i, slowest, slowest_edit, &slowest_usage);
   printf ("%sedit only (analysis + widgets) median: %.2f ms, max %.2f ms\n", prefix, edit_only[N_EDITS / 2],
           edit_only[N_EDITS - 1]);
   if (times[N_EDITS / 2] > 4.0 || times[N_EDITS - 1] > 16.0)
