@@ -112,6 +112,9 @@ struct _CwWindow
   gulong        first_frame_id; /* after-paint handler that sets the window icon */
   gboolean      frame_sync;     /* X11: frame sync with the window manager is on */
   gulong        sync_id;        /* X11: before-paint handler, a round trip while frame sync is off */
+  gulong        prefault_id;    /* X11: after-paint handler looking for Cairo's frame memory */
+  guint         prefault_idle;
+  guint         prefault_tries;
   guint         n_custom_shown; /* custom groups in groups_store */
   gboolean      updating_temperature;
   gboolean      close_confirmed;

@@ -8,6 +8,7 @@
 #endif
 
 #include "cw-app-data.h"
+#include "cw-frame-memory.h"
 #include "cw-group-item.h"
 #include "cw-window-private.h"
 
@@ -411,6 +412,32 @@ sync_before_frame_cb (GdkFrameClock *clock,
   if (!self->frame_sync)
     gdk_display_sync (gtk_widget_get_display (GTK_WIDGET (self)));
 }
+
+/* The memory Cairo shares with the X server for frames (cw-frame-memory.c) is paged in once
+ * per process, on a thread, as soon as it exists: Cairo sets it up at the first frame that
+ * needs it, not always the first one. Looked for after a frame, not in it, for the first
+ * 200 frames. The top 8 MB: two blocks of the window's default size. */
+static gboolean
+prefault_idle_cb (gpointer data)
+{
+  static gboolean done;
+  CwWindow       *self = data;
+
+  self->prefault_idle = 0;
+  if (!done)
+    done = cw_frame_memory_prefault (8 << 20) > 0;
+  if ((done || ++self->prefault_tries >= 200) && self->prefault_id != 0)
+    g_clear_signal_handler (&self->prefault_id, gtk_widget_get_frame_clock (GTK_WIDGET (self)));
+  return G_SOURCE_REMOVE;
+}
+
+static void
+prefault_after_frame_cb (GdkFrameClock *clock,
+                         CwWindow      *self)
+{
+  if (self->prefault_idle == 0)
+    self->prefault_idle = g_idle_add_full (G_PRIORITY_LOW, prefault_idle_cb, self, NULL);
+}
 #endif
 
 static void
@@ -429,6 +456,9 @@ cw_window_realize (GtkWidget *widget)
                                G_CALLBACK (update_frame_sync), self, G_CONNECT_SWAPPED);
       self->sync_id = g_signal_connect (gtk_widget_get_frame_clock (widget), "before-paint",
                                         G_CALLBACK (sync_before_frame_cb), self);
+      if (GSK_IS_CAIRO_RENDERER (gtk_native_get_renderer (GTK_NATIVE (self))) && self->prefault_tries < 200)
+        self->prefault_id = g_signal_connect (gtk_widget_get_frame_clock (widget), "after-paint",
+                                              G_CALLBACK (prefault_after_frame_cb), self);
     }
 #endif
   /* The window's icon is set once its first frame is on screen: on X11 GTK renders the
@@ -449,6 +479,9 @@ cw_window_unrealize (GtkWidget *widget)
     g_clear_signal_handler (&self->first_frame_id, gtk_widget_get_frame_clock (widget));
   if (self->sync_id != 0)
     g_clear_signal_handler (&self->sync_id, gtk_widget_get_frame_clock (widget));
+  if (self->prefault_id != 0)
+    g_clear_signal_handler (&self->prefault_id, gtk_widget_get_frame_clock (widget));
+  g_clear_handle_id (&self->prefault_idle, g_source_remove);
 #ifdef GDK_WINDOWING_X11
   if (GDK_IS_X11_DISPLAY (gtk_widget_get_display (widget)))
     g_signal_handlers_disconnect_by_func (gdk_x11_display_get_screen (gtk_widget_get_display (widget)),

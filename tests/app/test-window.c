@@ -1,11 +1,18 @@
 #include "config.h"
 
 #include <math.h>
+#include <stdio.h>
+#include <string.h>
+#ifdef __linux__
+#include <sys/mman.h>
+#include <unistd.h>
+#endif
 
 #include "app-test-helpers.h"
 #include "cw-application.h"
 #include "cw-custom-group-dialog.h"
 #include "app-test-window.h"
+#include "cw-frame-memory.h"
 #ifdef GDK_WINDOWING_X11
 #include <gdk/x11/gdkx.h>
 #endif
@@ -779,6 +786,59 @@ test_frame_sync (void)
 #endif
 }
 
+/* The memory Cairo shares with the X server for frames is paged in ahead of use: once a
+ * window has drawn the demo, the top of that pool (8 MB, or all of it when smaller) is
+ * resident, so the first frames that land there take no page faults. */
+static void
+test_frame_memory (void)
+{
+#if defined(GDK_WINDOWING_X11) && defined(__linux__)
+  CwWindow        *win = new_window ();
+  g_autofree char *demo = g_build_filename (cw_data_find_dir (), "demo.json", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (demo);
+  g_autofree char *maps = NULL;
+  gint64           end = g_get_monotonic_time () + 5 * G_USEC_PER_SEC;
+  gsize            checked = 0;
+
+  if (!GDK_IS_X11_DISPLAY (gtk_widget_get_display (GTK_WIDGET (win))) ||
+      !GSK_IS_CAIRO_RENDERER (gtk_native_get_renderer (GTK_NATIVE (win))))
+    {
+      destroy_window (win);
+      g_test_skip ("not the Cairo renderer on X11");
+      return;
+    }
+  g_assert_true (cw_window_open_file (win, file, NULL));
+  while (cw_frame_memory_get_prefaulted () == 0 && g_get_monotonic_time () < end)
+    app_test_pump (20, NULL);
+  g_assert_cmpuint (cw_frame_memory_get_prefaulted (), >, 0);
+
+  g_assert_true (g_file_get_contents ("/proc/self/maps", &maps, NULL, NULL));
+  for (char *line = strtok (maps, "\n"); line != NULL; line = strtok (NULL, "\n"))
+    {
+      unsigned long  start, stop;
+      char           perms[5] = "";
+      gsize          length, page = (gsize) sysconf (_SC_PAGESIZE), n;
+      unsigned char *resident;
+
+      if (sscanf (line, "%lx-%lx %4s", &start, &stop, perms) != 3 || strcmp (perms, "rw-s") != 0 ||
+          strstr (line, " /SYSV") == NULL)
+        continue;
+      length = MIN ((gsize) (stop - start), (gsize) 8 << 20);
+      n = length / page;
+      resident = g_malloc (n);
+      g_assert_cmpint (mincore ((void *) (stop - length), length, resident), ==, 0);
+      for (gsize i = 0; i < n; i++)
+        g_assert_cmpuint (resident[i] & 1, ==, 1);
+      g_free (resident);
+      checked += length;
+    }
+  g_assert_cmpuint (checked, >=, cw_frame_memory_get_prefaulted ());
+  destroy_window (win);
+#else
+  g_test_skip ("needs X11 on Linux");
+#endif
+}
+
 /* The main and export menus are built when they first open; they then hold the template's
  * menus, and open again as they are. */
 static void
@@ -820,6 +880,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/window/edit-updates-results", test_edit_updates_results);
   g_test_add_func ("/app/window/dark-style", test_dark_style);
   g_test_add_func ("/app/window/frame-sync", test_frame_sync);
+  g_test_add_func ("/app/window/frame-memory", test_frame_memory);
   g_test_add_func ("/app/window/menus", test_menus);
   g_test_add_func ("/app/window/result-sheet", test_result_sheet);
   g_test_add_func ("/app/window/steady-label", test_steady_label);
