@@ -461,10 +461,11 @@ cw_window_realize (GtkWidget *widget)
                                               G_CALLBACK (prefault_after_frame_cb), self);
     }
 #endif
-  /* The window's icon is set once its first frame is on screen: on X11 GTK renders the
-   * icon at several sizes for the window manager when it is set, and the SVG renderer it
-   * loads for that (with its XML and Unicode libraries) is about a twentieth of the time
-   * to the first frame, and 8 MB. */
+  /* The window's icon is set once its first frame is on screen: on X11 GTK then renders the
+   * icon at every size it has for the window manager. The icon is drawn at fixed sizes
+   * (data/icons/hicolor/NxN, PNG), so no SVG renderer is loaded for it: with only the
+   * scalable icon that renderer (with its XML and Unicode libraries) took about a twentieth
+   * of the time to the first frame, and 8 MB. */
   if (gtk_window_get_icon_name (GTK_WINDOW (self)) == NULL && self->first_frame_id == 0)
     self->first_frame_id = g_signal_connect (gtk_widget_get_frame_clock (widget), "after-paint",
                                              G_CALLBACK (first_frame_cb), self);

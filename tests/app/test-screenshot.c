@@ -1,5 +1,7 @@
 #include "config.h"
 
+#include <string.h>
+
 #include "app-test-helpers.h"
 #include "cw-window-private.h"
 
@@ -279,6 +281,53 @@ test_ring_drawings (void)
   gtk_window_destroy (GTK_WINDOW (fresh));
 }
 
+/* The window's icon comes from pictures drawn at fixed sizes (data/icons/hicolor/NxN), so
+ * setting it loads no SVG renderer (8 MB resident, measured when it did). Nothing else in
+ * this program loads one. */
+static void
+test_window_icon (void)
+{
+  CwWindow     *win = g_object_new (CW_TYPE_WINDOW, NULL);
+  GtkIconTheme *theme;
+  gint64        end = g_get_monotonic_time () + 5 * G_USEC_PER_SEC;
+  const int     sizes[] = { 16, 32, 48, 64, 128 };
+
+  theme = gtk_icon_theme_get_for_display (gtk_widget_get_display (GTK_WIDGET (win)));
+  /* Where the program's GtkApplication finds them (its resource base path + "/icons"); this
+   * test runs the window without one. */
+  if (!gtk_icon_theme_has_icon (theme, CW_APP_ID))
+    gtk_icon_theme_add_resource_path (theme, "/org/chairwise/Chairwise/icons");
+  gtk_window_present (GTK_WINDOW (win));
+  app_test_wait_mapped (GTK_WIDGET (win));
+  while (gtk_window_get_icon_name (GTK_WINDOW (win)) == NULL && g_get_monotonic_time () < end)
+    app_test_pump (20, NULL);
+  g_assert_cmpstr (gtk_window_get_icon_name (GTK_WINDOW (win)), ==, CW_APP_ID);
+  app_test_pump (100, NULL);
+
+  for (guint i = 0; i < G_N_ELEMENTS (sizes); i++)
+    {
+      g_autoptr (GtkIconPaintable) icon =
+        gtk_icon_theme_lookup_icon (theme, CW_APP_ID, NULL, sizes[i], 1, GTK_TEXT_DIR_LTR, 0);
+      g_autoptr (GFile) file = gtk_icon_paintable_get_file (icon);
+      g_autofree char *uri = file ? g_file_get_uri (file) : NULL;
+
+      g_assert_nonnull (uri);
+      g_assert_nonnull (strstr (uri, CW_APP_ID));
+      g_assert_true (g_str_has_suffix (uri, ".png"));
+      g_assert_cmpint (gdk_paintable_get_intrinsic_width (GDK_PAINTABLE (icon)), ==, sizes[i]);
+    }
+#ifdef __linux__
+  {
+    g_autofree char *maps = NULL;
+
+    g_assert_true (g_file_get_contents ("/proc/self/maps", &maps, NULL, NULL));
+    g_assert_null (strstr (maps, "librsvg"));
+  }
+#endif
+  win->close_confirmed = TRUE;
+  gtk_window_destroy (GTK_WINDOW (win));
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -287,5 +336,6 @@ main (int argc, char *argv[])
   g_test_add_func ("/app/screenshot/not-blank", test_screenshot_not_blank);
   g_test_add_func ("/app/screenshot/worker-figures", test_worker_figures_same_pixels);
   g_test_add_func ("/app/screenshot/ring-drawings", test_ring_drawings);
+  g_test_add_func ("/app/screenshot/window-icon", test_window_icon);
   return g_test_run ();
 }
