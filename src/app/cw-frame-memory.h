@@ -5,11 +5,15 @@
 G_BEGIN_DECLS
 
 /* Memory that Cairo's X11 backend shares with the X server for the window's frames, paged
- * in ahead of use (see cw-frame-memory.c). Starts a thread that pages in the top
- * `max_bytes` of each such block of this process and returns how many bytes it was given,
- * 0 when there is none or the system cannot do it. */
-gsize cw_frame_memory_prefault (gsize max_bytes);
-/* Bytes paged in so far by those threads. */
-gsize cw_frame_memory_get_prefaulted (void);
+ * in ahead of use, a step at a time (see cw-frame-memory.c). One set per process. */
+
+/* Looks for that memory and sets aside the top `max_bytes` of each block of it to be paged
+ * in. Returns the bytes set aside, 0 when there is none (yet) or the system cannot do it;
+ * once found, later calls return the same without looking again. */
+gsize    cw_frame_memory_find (gsize max_bytes);
+/* Pages in up to `bytes` more of what was set aside; returns TRUE while some is left. */
+gboolean cw_frame_memory_step (gsize bytes);
+/* Bytes paged in so far. */
+gsize    cw_frame_memory_get_prefaulted (void);
 
 G_END_DECLS

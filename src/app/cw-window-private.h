@@ -115,6 +115,7 @@ struct _CwWindow
   gulong        prefault_id;    /* X11: after-paint handler looking for Cairo's frame memory */
   guint         prefault_idle;
   guint         prefault_tries;
+  gboolean      prefault_found;
   guint         n_custom_shown; /* custom groups in groups_store */
   gboolean      updating_temperature;
   gboolean      close_confirmed;
