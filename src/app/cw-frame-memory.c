@@ -67,9 +67,10 @@ cw_frame_memory_find (gsize max_bytes)
       if (sscanf (line, "%lx-%lx %4s", &start, &end, perms) != 3 || end <= start || strcmp (perms, "rw-s") != 0 ||
           strstr (line, " /SYSV") == NULL)
         continue;
-      r.length = MIN ((gsize) (end - start), max_bytes);
+      r.length = MIN ((gsize) (end - start), max_bytes - total);
       r.start = (guintptr) end - r.length;
-      g_array_append_val (ranges, r);
+      if (r.length > 0)
+        g_array_append_val (ranges, r);
       total += r.length;
     }
   found_total = total;
