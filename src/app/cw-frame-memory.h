@@ -10,10 +10,10 @@ G_BEGIN_DECLS
 /* Looks for that memory and sets aside the top of each block of it to be paged in, up to
  * `max_bytes` in all. Returns the bytes set aside, 0 when there is none (yet) or the system cannot do it;
  * once found, later calls return the same without looking again. */
-gsize    cw_frame_memory_find (gsize max_bytes);
+gsize cw_frame_memory_find (gsize max_bytes);
 /* Pages in up to `bytes` more of what was set aside; returns TRUE while some is left. */
 gboolean cw_frame_memory_step (gsize bytes);
 /* Bytes paged in so far. */
-gsize    cw_frame_memory_get_prefaulted (void);
+gsize cw_frame_memory_get_prefaulted (void);
 
 G_END_DECLS
