@@ -111,8 +111,8 @@ test_edit_updates_results (void)
 
 /* The temperature slider moves the document's temperature, and the header's temperature
  * button follows it while the slider is dragged (not only when the temperature is set
- * elsewhere). 310.15 K = 37.0 °C, 273.15 K = 0 °C (CODATA: the definition of the Celsius
- * scale). */
+ * elsewhere). 310.15 K = 37.0 °C: 0 °C is 273.15 K by the definition of the Celsius scale
+ * (BIPM, The International System of Units, 9th edition, 2019). */
 static void
 test_temperature_slider (void)
 {
