@@ -36,7 +36,7 @@ typedef struct
   gsize    done;
 } Range;
 
-static GArray *ranges;      /* of Range, once found, until all are paged in */
+static GArray *ranges;      /* of Range, once found */
 static gsize   found_total; /* bytes set aside, once found */
 #endif
 
@@ -107,7 +107,6 @@ cw_frame_memory_step (gsize bytes)
   for (guint i = 0; i < ranges->len; i++)
     if (g_array_index (ranges, Range, i).done < g_array_index (ranges, Range, i).length)
       return TRUE;
-  g_clear_pointer (&ranges, g_array_unref);
   return FALSE;
 #else
   return FALSE;
@@ -118,4 +117,20 @@ gsize
 cw_frame_memory_get_prefaulted (void)
 {
   return prefaulted;
+}
+
+gboolean
+cw_frame_memory_get_range (guint     i,
+                           gpointer *start,
+                           gsize    *length)
+{
+#if defined(__linux__) && defined(MADV_POPULATE_WRITE)
+  if (ranges == NULL || i >= ranges->len)
+    return FALSE;
+  *start = (gpointer) g_array_index (ranges, Range, i).start;
+  *length = g_array_index (ranges, Range, i).length;
+  return TRUE;
+#else
+  return FALSE;
+#endif
 }

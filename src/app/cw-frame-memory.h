@@ -15,5 +15,9 @@ gsize cw_frame_memory_find (gsize max_bytes);
 gboolean cw_frame_memory_step (gsize bytes);
 /* Bytes paged in so far. */
 gsize cw_frame_memory_get_prefaulted (void);
+/* The i-th part set aside (its start and length), FALSE past the last. */
+gboolean cw_frame_memory_get_range (guint     i,
+                                    gpointer *start,
+                                    gsize    *length);
 
 G_END_DECLS
